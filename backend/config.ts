@@ -1,0 +1,24 @@
+import path from 'node:path';
+
+/** Settings read once from the environment; every one has a default that works on a laptop. */
+export interface Config {
+  port: number;
+  host: string;
+  databaseFile: string;
+  logLevel: string;
+  production: boolean;
+}
+
+export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const port = Number(env.PORT ?? 3000);
+  if (!Number.isInteger(port) || port < 0 || port > 65535) {
+    throw new Error(`PORT must be an integer from 0 to 65535, not '${env.PORT}'`);
+  }
+  return {
+    port,
+    host: env.HOST ?? '127.0.0.1',
+    databaseFile: env.DATABASE_FILE ?? path.join('data', 'conductory.sqlite'),
+    logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
+    production: env.NODE_ENV === 'production',
+  };
+}

@@ -1,0 +1,34 @@
+import type { Knex } from 'knex';
+import { PRAGMAS } from './knex';
+import { demoSeeds, referenceSeeds } from './seed-source';
+
+export interface PrepareOptions {
+  /** Load the invented demo scenario as well as the reference table. */
+  demo: boolean;
+}
+
+/**
+ * Brings a database up to date before the server listens: migrations, then the reference table
+ * and the demo scenario when the database has none yet (an existing table is never overwritten).
+ */
+export async function prepareDatabase(knex: Knex, options: PrepareOptions): Promise<void> {
+  await knex.migrate.latest();
+  await checkPragmas(knex);
+  const [{ count }] = (await knex('alloys').count({ count: '*' })) as [{ count: number }];
+  if (Number(count) === 0) {
+    for (const seed of referenceSeeds) await seed(knex);
+  }
+  if (options.demo) {
+    const [{ stacks }] = (await knex('stacks').count({ stacks: '*' })) as [{ stacks: number }];
+    if (Number(stacks) === 0) for (const seed of demoSeeds) await seed(knex);
+  }
+}
+
+/** Reads the pragmas back: a connection without foreign keys would silently accept orphans. */
+async function checkPragmas(knex: Knex): Promise<void> {
+  const [fk] = (await knex.raw('PRAGMA foreign_keys')) as Array<{ foreign_keys: number }>;
+  const [timeout] = (await knex.raw('PRAGMA busy_timeout')) as Array<{ timeout: number }>;
+  if (fk?.foreign_keys !== PRAGMAS.foreign_keys || timeout?.timeout !== PRAGMAS.busy_timeout) {
+    throw new Error('SQLite pragmas were not applied (foreign_keys, busy_timeout)');
+  }
+}

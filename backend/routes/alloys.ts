@@ -1,0 +1,58 @@
+import { Router, type Request } from 'express';
+import type { AlloyRecord } from '../../shared/catalogue/alloy-record';
+import { ProblemError } from '../http/problem';
+import type { CatalogueQuery, CatalogueItem } from '../services/catalogue';
+import type { CatalogueStore } from '../services/catalogue-store';
+
+/** Query values arrive as strings (already checked against openapi.yaml); turn them into types. */
+function parseQuery(req: Request): CatalogueQuery {
+  const q = req.query as Record<string, string | string[] | undefined>;
+  const num = (name: string) => (q[name] === undefined ? undefined : Number(q[name]));
+  const family = q.family === undefined ? undefined : ([] as string[]).concat(q.family);
+  return {
+    q: typeof q.q === 'string' ? q.q : undefined,
+    family,
+    magnetic: q.magnetic === undefined ? undefined : String(q.magnetic) === 'true',
+    conductivityMin: num('conductivityMin'),
+    conductivityMax: num('conductivityMax'),
+    conductivityUnit: typeof q.conductivityUnit === 'string' ? q.conductivityUnit : undefined,
+    densityMin: num('densityMin'),
+    densityMax: num('densityMax'),
+    densityUnit: typeof q.densityUnit === 'string' ? q.densityUnit : undefined,
+    sort: typeof q.sort === 'string' ? q.sort : undefined,
+    limit: num('limit') ?? 25,
+    offset: num('offset') ?? 0,
+  };
+}
+
+function detail(record: AlloyRecord, item: CatalogueItem) {
+  return {
+    ...item,
+    composition: Object.entries(record.composition).map(([element, massPercent]) => ({
+      element,
+      massPercent,
+    })),
+    condition: record.condition,
+    notes: record.notes,
+    values: record.values,
+  };
+}
+
+export function alloysRouter(catalogue: CatalogueStore): Router {
+  const router = Router();
+
+  router.get('/alloys', async (req, res) => {
+    const table = await catalogue.get();
+    res.json(table.search(parseQuery(req)));
+  });
+
+  router.get('/alloys/:slug', async (req, res) => {
+    const table = await catalogue.get();
+    const slug = String(req.params.slug);
+    const found = table.find(slug);
+    if (!found) throw new ProblemError(404, 'Not found', `No alloy '${slug}' in the table`);
+    res.json(detail(found.record, found.item));
+  });
+
+  return router;
+}

@@ -1,0 +1,168 @@
+import Fuse from 'fuse.js';
+import { restsOnMemory, valueOf, type AlloyRecord } from '../../shared/catalogue/alloy-record';
+import { elementNames } from '../../shared/catalogue/element-names';
+import { isResistivityUnit, percentIacs, toSiemensPerMetre } from '../../shared/units/conductivity';
+import { toKilogramsPerCubicMetre } from '../../shared/units/density';
+
+export type SortKey = 'relevance' | 'name' | 'uns' | 'family' | 'conductivity' | 'density';
+
+export interface CatalogueQuery {
+  q?: string;
+  family?: string[];
+  magnetic?: boolean;
+  conductivityMin?: number;
+  conductivityMax?: number;
+  conductivityUnit?: string;
+  densityMin?: number;
+  densityMax?: number;
+  densityUnit?: string;
+  sort?: string;
+  limit: number;
+  offset: number;
+}
+
+export interface CatalogueItem {
+  slug: string;
+  name: string;
+  uns: string | null;
+  family: string;
+  magnetic: boolean;
+  relativePermeability: number;
+  conductivitySPerM: number;
+  conductivityPercentIacs: number;
+  densityKgPerM3: number;
+  fromMemory: boolean;
+}
+
+export interface CataloguePage {
+  items: CatalogueItem[];
+  total: number;
+  limit: number;
+  offset: number;
+}
+
+interface Indexed {
+  record: AlloyRecord;
+  item: CatalogueItem;
+  elements: string;
+}
+
+function toItem(record: AlloyRecord): CatalogueItem {
+  const conductivity = valueOf(record, 'conductivity')?.nominal ?? NaN;
+  return {
+    slug: record.slug,
+    name: record.name,
+    uns: record.uns,
+    family: record.family,
+    magnetic: record.magnetic,
+    relativePermeability: record.relativePermeability,
+    conductivitySPerM: conductivity,
+    conductivityPercentIacs: percentIacs(conductivity),
+    densityKgPerM3: valueOf(record, 'density')?.nominal ?? NaN,
+    fromMemory: restsOnMemory(record),
+  };
+}
+
+const compareBy: Record<
+  Exclude<SortKey, 'relevance'>,
+  (a: CatalogueItem, b: CatalogueItem) => number
+> = {
+  name: (a, b) => a.name.localeCompare(b.name),
+  uns: (a, b) => (a.uns ?? '\uffff').localeCompare(b.uns ?? '\uffff'),
+  family: (a, b) => a.family.localeCompare(b.family) || a.name.localeCompare(b.name),
+  conductivity: (a, b) => a.conductivitySPerM - b.conductivitySPerM,
+  density: (a, b) => a.densityKgPerM3 - b.densityKgPerM3,
+};
+
+/**
+ * The searchable catalogue: the published table held in memory (a few hundred rows at most) with a
+ * fuzzy index over name, UNS number, family and elements. Rebuilt when the table changes.
+ */
+export class Catalogue {
+  private readonly entries: Indexed[];
+  private readonly bySlug: Map<string, Indexed>;
+  private readonly fuse: Fuse<Indexed>;
+
+  constructor(records: AlloyRecord[]) {
+    this.entries = records.map((record) => ({
+      record,
+      item: toItem(record),
+      elements: Object.keys(record.composition)
+        .map((symbol) => `${symbol} ${elementNames[symbol] ?? ''}`)
+        .join(' '),
+    }));
+    this.bySlug = new Map(this.entries.map((e) => [e.record.slug, e]));
+    this.fuse = new Fuse(this.entries, {
+      keys: [
+        { name: 'item.name', weight: 3 },
+        { name: 'item.uns', weight: 3 },
+        { name: 'item.family', weight: 1 },
+        { name: 'elements', weight: 1 },
+      ],
+      threshold: 0.35,
+      ignoreLocation: true,
+      includeScore: true,
+    });
+  }
+
+  get size(): number {
+    return this.entries.length;
+  }
+
+  /** The alloy and its catalogue summary, or undefined for an unknown slug. */
+  find(slug: string): { record: AlloyRecord; item: CatalogueItem } | undefined {
+    return this.bySlug.get(slug);
+  }
+
+  all(): AlloyRecord[] {
+    return this.entries.map((e) => e.record);
+  }
+
+  search(query: CatalogueQuery): CataloguePage {
+    const text = query.q?.trim() ?? '';
+    let items = text
+      ? this.fuse.search(text).map((hit) => hit.item.item)
+      : this.entries.map((e) => e.item);
+    items = items.filter((item) => matchesFilters(item, query));
+    const sort = query.sort ?? (text ? 'relevance' : 'name');
+    const descending = sort.startsWith('-');
+    const key = (descending ? sort.slice(1) : sort) as SortKey;
+    if (key !== 'relevance') {
+      const compare = compareBy[key];
+      items = [...items].sort((a, b) => (descending ? compare(b, a) : compare(a, b)));
+    } else if (descending) {
+      items = [...items].reverse();
+    }
+    return {
+      items: items.slice(query.offset, query.offset + query.limit),
+      total: items.length,
+      limit: query.limit,
+      offset: query.offset,
+    };
+  }
+}
+
+/** Range filters in the unit the caller gave; a resistivity range turns around in conductivity. */
+function matchesFilters(item: CatalogueItem, query: CatalogueQuery): boolean {
+  if (query.family?.length && !query.family.includes(item.family)) return false;
+  if (query.magnetic !== undefined && item.magnetic !== query.magnetic) return false;
+  const cUnit = query.conductivityUnit ?? '%IACS';
+  const bounds = [query.conductivityMin, query.conductivityMax].map((v) =>
+    v === undefined ? undefined : toSiemensPerMetre(v, cUnit),
+  );
+  const [cLow, cHigh] = isResistivityUnit(cUnit) ? [bounds[1], bounds[0]] : bounds;
+  if (cLow !== undefined && item.conductivitySPerM < cLow) return false;
+  if (cHigh !== undefined && item.conductivitySPerM > cHigh) return false;
+  const dUnit = query.densityUnit ?? 'g/cm3';
+  if (
+    query.densityMin !== undefined &&
+    item.densityKgPerM3 < toKilogramsPerCubicMetre(query.densityMin, dUnit)
+  )
+    return false;
+  if (
+    query.densityMax !== undefined &&
+    item.densityKgPerM3 > toKilogramsPerCubicMetre(query.densityMax, dUnit)
+  )
+    return false;
+  return true;
+}

@@ -1,0 +1,52 @@
+/** An alloy as the reference table holds it, SI values inside. Shared by the services and tests. */
+export type SourceKind = 'handbook' | 'standard' | 'paper' | 'measurement_set' | 'from_memory';
+
+export interface SourceRecord {
+  id: number;
+  citation: string;
+  kind: SourceKind;
+  locator: string | null;
+  url: string | null;
+}
+
+export type QuantityName =
+  'conductivity' | 'density' | 'resistivity_temperature_coefficient' | 'relative_permeability';
+
+export interface PropertyValueRecord {
+  quantity: QuantityName;
+  nominal: number;
+  min: number | null;
+  max: number | null;
+  /** SI unit of nominal, min and max: S/m, kg/m3, 1/K or 1. */
+  unit: string;
+  referenceTemperatureK: number;
+  condition: string | null;
+  source: SourceRecord;
+}
+
+export interface AlloyRecord {
+  id: number;
+  slug: string;
+  name: string;
+  family: string;
+  uns: string | null;
+  magnetic: boolean;
+  relativePermeability: number;
+  composition: Record<string, number>;
+  condition: string | null;
+  notes: string | null;
+  status: 'published' | 'draft';
+  values: PropertyValueRecord[];
+}
+
+export function valueOf(
+  alloy: AlloyRecord,
+  quantity: QuantityName,
+): PropertyValueRecord | undefined {
+  return alloy.values.find((v) => v.quantity === quantity);
+}
+
+/** True when any value of the alloy rests on a citation nobody has re-checked. */
+export function restsOnMemory(alloy: AlloyRecord): boolean {
+  return alloy.values.some((v) => v.source.kind === 'from_memory');
+}
