@@ -13,8 +13,8 @@ export interface MatchCandidate {
   reasons: string[];
 }
 
-/** Candidates below this score are noise: a reading many uncertainties away from the range. */
-const MIN_SCORE = 1e-4;
+/** Candidates below this score are noise: a reading some three uncertainties outside the range. */
+const MIN_SCORE = 0.005;
 
 /** Ranks every alloy against a reading, best first, and keeps the first `limit`. */
 export function matchReading(

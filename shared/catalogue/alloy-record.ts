@@ -46,7 +46,14 @@ export function valueOf(
   return alloy.values.find((v) => v.quantity === quantity);
 }
 
-/** True when any value of the alloy rests on a citation nobody has re-checked. */
+/**
+ * True when the alloy's headline figures (conductivity or density) rest on a citation nobody has
+ * re-checked; the Alloy sheet flags every other value one by one.
+ */
 export function restsOnMemory(alloy: AlloyRecord): boolean {
-  return alloy.values.some((v) => v.source.kind === 'from_memory');
+  return alloy.values.some(
+    (v) =>
+      (v.quantity === 'conductivity' || v.quantity === 'density') &&
+      v.source.kind === 'from_memory',
+  );
 }

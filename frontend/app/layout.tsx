@@ -1,0 +1,78 @@
+import { NavLink, Outlet, useNavigation } from 'react-router-dom';
+
+const linkClass = ({ isActive }: { isActive: boolean }) =>
+  `rounded px-3 py-1.5 text-sm font-medium ${isActive ? 'bg-paper text-patina-900' : 'text-patina-50 hover:bg-patina-700'}`;
+
+/** Our mark: a coil's field lines closing through a blank, drawn in two strokes. */
+function Mark() {
+  return (
+    <svg aria-hidden="true" viewBox="0 0 32 32" className="h-7 w-7">
+      <rect x="4" y="20" width="24" height="5" rx="1.5" fill="#e3a677" />
+      <path
+        d="M8 18c0-6 4-10 8-10s8 4 8 10"
+        fill="none"
+        stroke="#f7f5f0"
+        strokeWidth="2.2"
+        strokeLinecap="round"
+      />
+      <path
+        d="M12 18c0-3 2-5 4-5s4 2 4 5"
+        fill="none"
+        stroke="#f7f5f0"
+        strokeWidth="2.2"
+        strokeLinecap="round"
+      />
+    </svg>
+  );
+}
+
+export function Layout() {
+  const navigation = useNavigation();
+  return (
+    <div className="flex min-h-screen flex-col">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-white focus:p-2"
+      >
+        Skip to content
+      </a>
+      <header className="bg-patina-900 text-white">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+          <NavLink to="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight">
+            <Mark />
+            Conductory
+          </NavLink>
+          <nav aria-label="Main" className="flex flex-wrap gap-1">
+            <NavLink to="/" end className={linkClass}>
+              Catalogue
+            </NavLink>
+            <NavLink to="/match" className={linkClass}>
+              Match
+            </NavLink>
+            <a
+              href="/api/docs/"
+              className="rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700"
+            >
+              API reference
+            </a>
+          </nav>
+        </div>
+        <div
+          role="progressbar"
+          aria-label="Loading"
+          aria-hidden={navigation.state === 'idle'}
+          className={`h-0.5 bg-copper-300 transition-opacity ${navigation.state === 'idle' ? 'opacity-0' : 'animate-pulse opacity-100'}`}
+        />
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
+        <Outlet />
+      </main>
+      <footer className="border-t border-patina-100 text-xs text-ink/60">
+        <div className="mx-auto max-w-6xl px-4 py-3">
+          Conductory: conductivity and density of metals and alloys, every value with its source.
+          Values at 20 °C unless stated.
+        </div>
+      </footer>
+    </div>
+  );
+}

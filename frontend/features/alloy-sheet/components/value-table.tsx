@@ -1,0 +1,116 @@
+import { FromMemoryBadge } from '../../../components/badges';
+import type { PropertyValue } from '../../../lib/api-types';
+import {
+  formatConductivity,
+  formatConductivityRange,
+  formatDensity,
+  formatEditable,
+  formatNumber,
+} from '../../../lib/format';
+import type { UnitPreferences } from '../../../lib/unit-preferences';
+
+const quantityLabels: Record<PropertyValue['quantity'], string> = {
+  conductivity: 'Electrical conductivity',
+  density: 'Density',
+  resistivity_temperature_coefficient: 'Temperature coefficient of resistivity',
+  relative_permeability: 'Relative permeability (low field)',
+};
+
+const sourceKindLabels: Record<string, string> = {
+  handbook: 'handbook',
+  standard: 'standard',
+  paper: 'paper',
+  measurement_set: 'measurement set',
+  from_memory: 'from memory',
+};
+
+/** One value in the chosen display unit: its nominal and its range. */
+function describe(
+  value: PropertyValue,
+  units: UnitPreferences,
+): { nominal: string; range: string } {
+  const hasRange = value.min !== null && value.max !== null;
+  switch (value.quantity) {
+    case 'conductivity':
+      return {
+        nominal: formatConductivity(value.nominal, units.conductivity),
+        range: hasRange ? formatConductivityRange(value.min!, value.max!, units.conductivity) : '—',
+      };
+    case 'density':
+      return {
+        nominal: formatDensity(value.nominal, units.density),
+        range: hasRange
+          ? `${formatDensity(value.min!, units.density)} – ${formatDensity(value.max!, units.density)}`
+          : '—',
+      };
+    case 'resistivity_temperature_coefficient':
+      return {
+        nominal: `${formatNumber(value.nominal)} /K`,
+        range: hasRange ? `${formatNumber(value.min!)}–${formatNumber(value.max!)} /K` : '—',
+      };
+    default:
+      return {
+        nominal: formatNumber(value.nominal),
+        range: hasRange ? `${formatNumber(value.min!)}–${formatNumber(value.max!)}` : '—',
+      };
+  }
+}
+
+export function ValueTable({ values, units }: { values: PropertyValue[]; units: UnitPreferences }) {
+  return (
+    <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+      <table className="w-full min-w-[40rem] border-collapse text-sm">
+        <caption className="sr-only">Every value on record for this alloy, with its source</caption>
+        <thead className="bg-patina-50 text-left">
+          <tr>
+            <th scope="col" className="px-3 py-2">
+              Quantity
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              Nominal
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              Range
+            </th>
+            <th scope="col" className="px-3 py-2">
+              At
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Source
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {values.map((v) => {
+            const shown = describe(v, units);
+            return (
+              <tr key={v.quantity} className="border-t border-patina-50 align-top">
+                <th scope="row" className="px-3 py-2 text-left font-medium">
+                  {quantityLabels[v.quantity]}
+                  {v.condition ? (
+                    <span className="block text-xs font-normal text-ink/60">{v.condition}</span>
+                  ) : null}
+                </th>
+                <td className="px-3 py-2 text-right tabular-nums">{shown.nominal}</td>
+                <td className="px-3 py-2 text-right tabular-nums">{shown.range}</td>
+                <td className="px-3 py-2 whitespace-nowrap">
+                  {formatEditable(v.referenceTemperatureK - 273.15)} °C
+                </td>
+                <td className="px-3 py-2">
+                  <span className="mr-1.5 text-xs uppercase tracking-wide text-patina-700">
+                    {sourceKindLabels[v.source.kind]}
+                  </span>
+                  {v.source.kind === 'from_memory' ? <FromMemoryBadge /> : null}
+                  <span className="block">{v.source.citation}</span>
+                  {v.source.locator ? (
+                    <span className="block text-xs text-ink/60">{v.source.locator}</span>
+                  ) : null}
+                </td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

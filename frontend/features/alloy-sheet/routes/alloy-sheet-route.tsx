@@ -1,0 +1,103 @@
+import { Link, useParams } from 'react-router-dom';
+import { FromMemoryBadge, MagneticBadge } from '../../../components/badges';
+import { NominalCaution } from '../../../components/nominal-caution';
+import { UnitSwitcher } from '../../../components/unit-switcher';
+import {
+  familyLabels,
+  formatConductivity,
+  formatDensity,
+  formatEditable,
+  formatNumber,
+} from '../../../lib/format';
+import { useUnitPreferences } from '../../../lib/unit-preferences';
+import { useAlloy } from '../api/get-alloy';
+import { ValueTable } from '../components/value-table';
+
+function Figure({ label, value }: { label: string; value: string }) {
+  return (
+    <div className="rounded-md border border-patina-100 bg-white px-4 py-3">
+      <dt className="text-xs uppercase tracking-wide text-ink/60">{label}</dt>
+      <dd className="text-lg font-semibold tabular-nums">{value}</dd>
+    </div>
+  );
+}
+
+export function AlloySheetRoute() {
+  const { slug = '' } = useParams();
+  const { data: alloy } = useAlloy(slug);
+  const [units] = useUnitPreferences();
+  return (
+    <article aria-labelledby="alloy-title" className="flex flex-col gap-5">
+      <nav aria-label="Breadcrumb" className="text-sm">
+        <Link to="/" className="text-patina-700 hover:underline">
+          Catalogue
+        </Link>{' '}
+        / {alloy.name}
+      </nav>
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 id="alloy-title" className="text-2xl font-semibold tracking-tight">
+            {alloy.name}
+          </h1>
+          <p className="flex flex-wrap items-center gap-2 text-sm text-ink/70">
+            <span>{alloy.uns ? `UNS ${alloy.uns}` : 'no UNS number'}</span>
+            <span aria-hidden="true">·</span>
+            <span>{familyLabels[alloy.family]}</span>
+            {alloy.condition ? (
+              <>
+                <span aria-hidden="true">·</span>
+                <span>{alloy.condition}</span>
+              </>
+            ) : null}
+            {alloy.magnetic ? <MagneticBadge /> : null}
+            {alloy.fromMemory ? <FromMemoryBadge /> : null}
+          </p>
+        </div>
+        <UnitSwitcher />
+      </header>
+
+      <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <Figure
+          label="Conductivity"
+          value={formatConductivity(alloy.conductivitySPerM, units.conductivity)}
+        />
+        <Figure label="%IACS" value={formatNumber(alloy.conductivityPercentIacs)} />
+        <Figure
+          label="Resistivity"
+          value={formatConductivity(alloy.conductivitySPerM, 'uohm_cm')}
+        />
+        <Figure label="Density" value={formatDensity(alloy.densityKgPerM3, units.density)} />
+      </dl>
+
+      {alloy.notes ? <p className="rounded-md bg-patina-50 p-3 text-sm">{alloy.notes}</p> : null}
+
+      <section aria-labelledby="values-title" className="flex flex-col gap-2">
+        <h2 id="values-title" className="text-lg font-semibold">
+          Values and sources
+        </h2>
+        <ValueTable values={alloy.values} units={units} />
+      </section>
+
+      <section aria-labelledby="composition-title" className="flex flex-col gap-2">
+        <h2 id="composition-title" className="text-lg font-semibold">
+          Nominal composition
+        </h2>
+        <ul className="flex flex-wrap gap-2 text-sm">
+          {alloy.composition.map((c) => (
+            <li
+              key={c.element}
+              className="rounded border border-patina-100 bg-white px-2 py-1 tabular-nums"
+            >
+              <span className="font-semibold">{c.element}</span> {formatEditable(c.massPercent, 4)}{' '}
+              %
+            </li>
+          ))}
+        </ul>
+        <p className="text-xs text-ink/60">
+          Mass per cent; the balance and trace elements as the standard for the alloy allows.
+        </p>
+      </section>
+      <NominalCaution />
+    </article>
+  );
+}

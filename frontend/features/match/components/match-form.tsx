@@ -1,0 +1,211 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import { unitLabel } from '../../../../shared/units/codes';
+import type { Reading } from '../../../lib/api-types';
+import { formatEditable } from '../../../lib/format';
+import {
+  matchFormDefaults,
+  matchFormSchema,
+  requestFromForm,
+  type MatchFormInput,
+  type MatchFormValues,
+} from '../match-form-schema';
+import type { MatchRequest } from '../../../../shared/schemas/match-request';
+
+const electricalUnits = ['%IACS', 'MS/m', 'S/m', 'uohm_cm', 'nohm_m', 'ohm_m'];
+const temperatureUnits = ['C', 'K', 'F'];
+const densityUnits = ['g/cm3', 'kg/m3', 'lb/in3'];
+
+const inputClass =
+  'w-full rounded border border-patina-300 bg-white px-2 py-1.5 aria-[invalid=true]:border-copper-500 aria-[invalid=true]:bg-copper-100';
+
+function FieldMessage({
+  id,
+  error,
+  hint,
+}: {
+  id: string;
+  error?: { message?: string };
+  hint?: string;
+}) {
+  if (error)
+    return (
+      <p id={id} className="text-xs text-copper-700">
+        {error.message}
+      </p>
+    );
+  return hint ? (
+    <p id={id} className="text-xs text-ink/60">
+      {hint}
+    </p>
+  ) : null;
+}
+
+interface Props {
+  readings: Reading[];
+  pending: boolean;
+  onSubmit: (request: MatchRequest) => void;
+}
+
+/** A reading in; every box keeps what was typed when the service refuses it. */
+export function MatchForm({ readings, pending, onSubmit }: Props) {
+  const {
+    register,
+    handleSubmit,
+    reset,
+    formState: { errors },
+  } = useForm<MatchFormInput, unknown, MatchFormValues>({
+    resolver: zodResolver(matchFormSchema),
+    defaultValues: matchFormDefaults,
+  });
+
+  const fillFrom = (id: string) => {
+    const r = readings.find((x) => String(x.id) === id);
+    if (!r) return;
+    reset({
+      ...matchFormDefaults,
+      conductivityValue: formatEditable(r.conductivitySPerM / 0.58e6, 4),
+      conductivityUnit: '%IACS',
+      temperatureValue: formatEditable(r.temperatureK - 273.15, 4),
+      temperatureUnit: 'C',
+      densityValue: r.densityKgPerM3 ? formatEditable(r.densityKgPerM3 / 1000, 4) : '',
+      densityUnit: 'g/cm3',
+    });
+  };
+
+  return (
+    <form
+      noValidate
+      aria-labelledby="match-form-title"
+      className="flex flex-col gap-4 rounded-md border border-patina-100 bg-white p-4"
+      onSubmit={handleSubmit((values) => onSubmit(requestFromForm(values)))}
+    >
+      <h2 id="match-form-title" className="text-lg font-semibold">
+        Reading
+      </h2>
+      {readings.length ? (
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Fill in from a recorded reading</span>
+          <select className={inputClass} defaultValue="" onChange={(e) => fillFrom(e.target.value)}>
+            <option value="">choose…</option>
+            {readings.map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.label}: {r.product}
+                {r.invented ? ' (invented demo data)' : ''}
+              </option>
+            ))}
+          </select>
+        </label>
+      ) : null}
+
+      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Conductivity or resistivity</span>
+          <input
+            className={inputClass}
+            inputMode="decimal"
+            autoFocus
+            aria-invalid={errors.conductivityValue ? true : undefined}
+            aria-describedby="conductivity-msg"
+            {...register('conductivityValue')}
+          />
+          <FieldMessage
+            id="conductivity-msg"
+            error={errors.conductivityValue}
+            hint="As the instrument shows it."
+          />
+        </label>
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Unit</span>
+          <select className={inputClass} {...register('conductivityUnit')}>
+            {electricalUnits.map((u) => (
+              <option key={u} value={u}>
+                {unitLabel(u)}
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
+
+      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Temperature of the piece</span>
+          <input
+            className={inputClass}
+            inputMode="decimal"
+            aria-invalid={errors.temperatureValue ? true : undefined}
+            aria-describedby="temperature-msg"
+            {...register('temperatureValue')}
+          />
+          <FieldMessage
+            id="temperature-msg"
+            error={errors.temperatureValue}
+            hint="Leave empty if unknown: taken as the table's 20 °C."
+          />
+        </label>
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Unit</span>
+          <select className={inputClass} {...register('temperatureUnit')}>
+            {temperatureUnits.map((u) => (
+              <option key={u} value={u}>
+                {unitLabel(u)}
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
+
+      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Density (optional)</span>
+          <input
+            className={inputClass}
+            inputMode="decimal"
+            aria-invalid={errors.densityValue ? true : undefined}
+            aria-describedby="density-msg"
+            {...register('densityValue')}
+          />
+          <FieldMessage
+            id="density-msg"
+            error={errors.densityValue}
+            hint="From mass and volume; sharpens the ranking."
+          />
+        </label>
+        <label className="flex flex-col gap-1 text-sm">
+          <span className="font-medium">Unit</span>
+          <select className={inputClass} {...register('densityUnit')}>
+            {densityUnits.map((u) => (
+              <option key={u} value={u}>
+                {unitLabel(u)}
+              </option>
+            ))}
+          </select>
+        </label>
+      </div>
+
+      <label className="flex flex-col gap-1 text-sm sm:w-48">
+        <span className="font-medium">Reading uncertainty (%)</span>
+        <input
+          className={inputClass}
+          inputMode="decimal"
+          aria-invalid={errors.uncertaintyPercent ? true : undefined}
+          aria-describedby="uncertainty-msg"
+          {...register('uncertaintyPercent')}
+        />
+        <FieldMessage
+          id="uncertainty-msg"
+          error={errors.uncertaintyPercent}
+          hint="One standard uncertainty."
+        />
+      </label>
+
+      <button
+        type="submit"
+        disabled={pending}
+        className="self-start rounded bg-copper-500 px-4 py-2 font-medium text-white hover:bg-copper-700 disabled:opacity-60"
+      >
+        {pending ? 'Ranking…' : 'Find candidates'}
+      </button>
+    </form>
+  );
+}

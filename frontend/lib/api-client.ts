@@ -1,0 +1,54 @@
+import type { Problem } from './api-types';
+
+/** Every non-2xx answer becomes one of these, whatever the route. */
+export class ApiProblem extends Error {
+  constructor(readonly problem: Problem) {
+    super(problem.detail ?? problem.title);
+    this.name = 'ApiProblem';
+  }
+  get status(): number {
+    return this.problem.status;
+  }
+}
+
+async function send<T>(path: string, init?: RequestInit): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(path, {
+      ...init,
+      headers: { Accept: 'application/json', ...init?.headers },
+    });
+  } catch {
+    throw new ApiProblem({
+      type: 'about:blank',
+      title: 'Network error',
+      status: 0,
+      detail: 'The service did not answer. Is it running?',
+    });
+  }
+  const body = response.headers.get('content-type')?.includes('json')
+    ? await response.json()
+    : null;
+  if (!response.ok) {
+    throw new ApiProblem(
+      (body as Problem | null) ?? {
+        type: 'about:blank',
+        title: response.statusText,
+        status: response.status,
+      },
+    );
+  }
+  return body as T;
+}
+
+export function apiGet<T>(path: string, signal?: AbortSignal): Promise<T> {
+  return send<T>(path, { signal });
+}
+
+export function apiPost<T>(path: string, body: unknown): Promise<T> {
+  return send<T>(path, {
+    method: 'POST',
+    body: JSON.stringify(body),
+    headers: { 'Content-Type': 'application/json' },
+  });
+}

@@ -1,0 +1,13 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiProblem } from './api-client';
+
+/** One client for the app; a 4xx is an answer, not a hiccup, so it is never retried. */
+export const queryClient = new QueryClient({
+  defaultOptions: {
+    queries: {
+      staleTime: 60_000,
+      retry: (count, error) =>
+        !(error instanceof ApiProblem && error.status >= 400 && error.status < 500) && count < 2,
+    },
+  },
+});
