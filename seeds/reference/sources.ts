@@ -108,4 +108,21 @@ export const sources: SourceRow[] = [
     locator: null,
     url: null,
   },
+  {
+    id: 13,
+    citation:
+      'Published mill data sheets for copper-nickel C70600 and C71500, annealed (ASTM B122/B111 products)',
+    kind: 'handbook',
+    locator:
+      'C70600: 9.0 %IACS, 19.1 µΩ·cm, 8.94 g/cm³; C71500: 4.6 %IACS, 37.5 µΩ·cm, 8.94 g/cm³ at 20 °C',
+    url: null,
+  },
+  {
+    id: 14,
+    citation: 'Aluminium mill data sheet for 6061 quoting Aluminum Association typical values',
+    kind: 'handbook',
+    locator:
+      '6061: 43 %IACS in T6 and T651, 47 %IACS in O temper, 40 %IACS in T451; density 2.70 g/cm³ at 20 °C',
+    url: null,
+  },
 ];
