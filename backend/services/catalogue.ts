@@ -82,6 +82,8 @@ export class Catalogue {
   private readonly entries: Indexed[];
   private readonly bySlug: Map<string, Indexed>;
   private readonly fuse: Fuse<Indexed>;
+  /** Fuzzy hits per search text: the table is immutable for this object's life, so they never go stale. */
+  private readonly hitCache = new Map<string, CatalogueItem[]>();
 
   constructor(records: AlloyRecord[]) {
     this.entries = records.map((record) => ({
@@ -118,11 +120,21 @@ export class Catalogue {
     return this.entries.map((e) => e.record);
   }
 
+  private fuzzyHits(text: string): CatalogueItem[] {
+    const key = text.toLowerCase();
+    let hits = this.hitCache.get(key);
+    if (!hits) {
+      hits = this.fuse.search(text).map((hit) => hit.item.item);
+      if (this.hitCache.size >= HIT_CACHE_SIZE)
+        this.hitCache.delete(this.hitCache.keys().next().value!);
+      this.hitCache.set(key, hits);
+    }
+    return hits;
+  }
+
   search(query: CatalogueQuery): CataloguePage {
     const text = query.q?.trim() ?? '';
-    let items = text
-      ? this.fuse.search(text).map((hit) => hit.item.item)
-      : this.entries.map((e) => e.item);
+    let items = text ? this.fuzzyHits(text) : this.entries.map((e) => e.item);
     items = items.filter((item) => matchesFilters(item, query));
     const sort = query.sort ?? (text ? 'relevance' : 'name');
     const descending = sort.startsWith('-');
@@ -141,6 +153,9 @@ export class Catalogue {
     };
   }
 }
+
+/** Most searches repeat (a sorter's operators type the same few names); keep the last few hundred. */
+const HIT_CACHE_SIZE = 256;
 
 /** Range filters in the unit the caller gave; a resistivity range turns around in conductivity. */
 function matchesFilters(item: CatalogueItem, query: CatalogueQuery): boolean {

@@ -1,0 +1,94 @@
+/**
+ * `npm run bench`: catalogue search and Match against a bare Express JSON endpoint, with autocannon
+ * on loopback in the same run; prints throughput, p50/p99 latency and the ratio to the bare
+ * endpoint. Ratios travel between machines; absolute numbers do not. No assertion: a report.
+ */
+import { fork } from 'node:child_process';
+import path from 'node:path';
+import autocannon from 'autocannon';
+import { projectRoot } from '../backend/paths';
+
+const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
+const CONNECTIONS = 10;
+
+interface Case {
+  name: string;
+  target: 'bare' | 'product';
+  method: 'GET' | 'POST';
+  path: string;
+  body?: unknown;
+}
+
+const cases: Case[] = [
+  { name: 'bare Express GET /json', target: 'bare', method: 'GET', path: '/json' },
+  {
+    name: 'catalogue search q=brass',
+    target: 'product',
+    method: 'GET',
+    path: '/api/v1/alloys?q=brass',
+  },
+  {
+    name: 'catalogue filter, sorted',
+    target: 'product',
+    method: 'GET',
+    path: '/api/v1/alloys?family=aluminium&sort=-conductivity',
+  },
+  {
+    name: 'bare Express POST /json',
+    target: 'bare',
+    method: 'POST',
+    path: '/json',
+    body: { conductivity: { value: 28, unit: '%IACS' } },
+  },
+  {
+    name: 'Match (28 %IACS, 8.53 g/cm³)',
+    target: 'product',
+    method: 'POST',
+    path: '/api/v1/match',
+    body: { conductivity: { value: 28, unit: '%IACS' }, density: { value: 8.53, unit: 'g/cm3' } },
+  },
+];
+
+const servers = fork(path.join(projectRoot, 'bench', 'servers.ts'), {
+  execArgv: ['--import', 'tsx'],
+  stdio: ['ignore', 'ignore', 'inherit', 'ipc'],
+});
+const ports = await new Promise<{ product: number; bare: number }>((resolve) =>
+  servers.once('message', resolve as never),
+);
+
+const rows: Array<{ name: string; rps: number; p50: number; p99: number; errors: number }> = [];
+for (const c of cases) {
+  const result = await autocannon({
+    url: `http://127.0.0.1:${ports[c.target]}${c.path}`,
+    method: c.method,
+    connections: CONNECTIONS,
+    duration: DURATION_S,
+    headers: c.body ? { 'content-type': 'application/json' } : {},
+    body: c.body ? JSON.stringify(c.body) : undefined,
+  });
+  rows.push({
+    name: c.name,
+    rps: result.requests.average,
+    p50: result.latency.p50,
+    p99: result.latency.p99,
+    errors: result.errors + result.non2xx,
+  });
+}
+servers.disconnect();
+
+const bareGet = rows[0]!.rps;
+const barePost = rows[3]!.rps;
+console.log(`\nautocannon, ${CONNECTIONS} connections, ${DURATION_S} s each, loopback\n`);
+console.log(
+  'case                                   req/s    p50 ms   p99 ms   errors   ratio to bare',
+);
+for (const [i, r] of rows.entries()) {
+  const bare = i < 3 ? bareGet : barePost;
+  console.log(
+    `${r.name.padEnd(36)} ${r.rps.toFixed(0).padStart(8)} ${r.p50.toFixed(1).padStart(9)} ${r.p99.toFixed(1).padStart(8)} ${String(r.errors).padStart(8)}   ${(r.rps / bare).toFixed(2)}`,
+  );
+}
+console.log(
+  '\nTargets (quality.md): catalogue search ≥ 0.50 of bare with p99 ≤ 25 ms; calculators p99 ≤ 50 ms.',
+);

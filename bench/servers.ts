@@ -1,0 +1,47 @@
+/**
+ * The two servers the benchmark compares, in a process of their own so that the load generator
+ * does not share their event loop: the product (on a fresh seeded database) and a bare Express
+ * endpoint that answers a fixed JSON object, the floor of what Express itself costs.
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import express from 'express';
+import type { AddressInfo } from 'node:net';
+import { createApp } from '../backend/app';
+import { createKnex } from '../backend/db/knex';
+import { prepareDatabase } from '../backend/db/prepare';
+
+const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'conductory-bench-'));
+const knex = createKnex(path.join(dir, 'bench.sqlite'));
+await prepareDatabase(knex, { demo: true });
+// Logged as `npm start` logs (info, one line per request); the parent sends this process's
+// stdout to /dev/null so the lines cost what they cost in production, without flooding the report.
+const product = createApp({
+  knex,
+  serveClient: false,
+  logLevel: process.env.LOG_LEVEL ?? 'info',
+}).listen(0, '127.0.0.1');
+
+const bare = express();
+bare.disable('x-powered-by');
+bare.use(express.json());
+const payload = { status: 'ok', items: [{ slug: 'x', value: 1 }] };
+bare.get('/json', (_req, res) => {
+  res.json(payload);
+});
+bare.post('/json', (_req, res) => {
+  res.json(payload);
+});
+const bareServer = bare.listen(0, '127.0.0.1');
+
+await Promise.all([product, bareServer].map((s) => new Promise((r) => s.once('listening', r))));
+process.send?.({
+  product: (product.address() as AddressInfo).port,
+  bare: (bareServer.address() as AddressInfo).port,
+});
+process.on('disconnect', () => {
+  product.close();
+  bareServer.close();
+  void knex.destroy().then(() => fs.rmSync(dir, { recursive: true, force: true }));
+});
