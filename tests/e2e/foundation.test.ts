@@ -33,10 +33,14 @@ describe('the foundation, as a person uses it in Chromium', () => {
 
   it('sorts by conductivity from the column header', async () => {
     await page.getByRole('button', { name: /Conductivity/ }).click();
-    await expect.poll(() => new URL(page.url()).searchParams.get('sort')).toMatch(/^-?conductivity$/);
+    await expect
+      .poll(() => new URL(page.url()).searchParams.get('sort'))
+      .toMatch(/^-?conductivity$/);
     const descending = new URL(page.url()).searchParams.get('sort')!.startsWith('-');
     const header = page.getByRole('columnheader', { name: /Conductivity/ });
-    await expect.poll(() => header.getAttribute('aria-sort')).toBe(descending ? 'descending' : 'ascending');
+    await expect
+      .poll(() => header.getAttribute('aria-sort'))
+      .toBe(descending ? 'descending' : 'ascending');
     const values = await page.locator('tbody tr td:nth-child(4)').allTextContents();
     const numbers = values.map(Number);
     expect(numbers).toEqual([...numbers].sort((a, b) => (descending ? b - a : a - b)));
@@ -60,22 +64,31 @@ describe('the foundation, as a person uses it in Chromium', () => {
     await page.getByRole('link', { name: 'Cartridge brass 70/30' }).click();
     await page.getByRole('heading', { name: 'Cartridge brass 70/30' }).waitFor();
     await page.getByRole('heading', { name: 'Values and sources' }).waitFor();
-    await expect(page.getByText(/Copper Development Association/).count()).resolves.toBeGreaterThan(0);
-    await expect(page.getByText('from memory', { exact: true }).count()).resolves.toBeGreaterThan(0);
-    await expect(page.getByRole('rowheader', { name: /Electrical conductivity/ }).count()).resolves.toBe(1);
+    await expect(page.getByText(/Copper Development Association/).count()).resolves.toBeGreaterThan(
+      0,
+    );
+    await expect(page.getByText('from memory', { exact: true }).count()).resolves.toBeGreaterThan(
+      0,
+    );
+    await expect(
+      page.getByRole('rowheader', { name: /Electrical conductivity/ }).count(),
+    ).resolves.toBe(1);
     await page.screenshot({ path: shot('e2e-alloy-sheet'), fullPage: true });
   });
 
   it('runs a Match for a cartridge-brass reading and sees C26000 among the first three', async () => {
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Match' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Match' })
+      .click();
     await page.getByLabel('Conductivity or resistivity').fill('28');
     await page.getByLabel('Density (optional)').fill('8.53');
     await page.getByRole('button', { name: 'Find candidates' }).click();
     const list = page.getByRole('list', { name: 'Candidates, best first' });
     await list.waitFor();
-    const firstThree = await list.locator(':scope > li').evaluateAll((items) =>
-      items.slice(0, 3).map((li) => li.textContent ?? ''),
-    );
+    const firstThree = await list
+      .locator(':scope > li')
+      .evaluateAll((items) => items.slice(0, 3).map((li) => li.textContent ?? ''));
     expect(firstThree.some((text) => text.includes('C26000'))).toBe(true);
     await page.screenshot({ path: shot('e2e-match'), fullPage: true });
   });

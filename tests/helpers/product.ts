@@ -20,13 +20,23 @@ export async function startProduct(): Promise<RunningProduct> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'conductory-e2e-'));
   const child: ChildProcess = spawn('npm', ['start'], {
     cwd: projectRoot,
-    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', DATABASE_FILE: path.join(dataDir, 'e2e.sqlite'), NODE_ENV: 'development', LOG_LEVEL: 'warn' },
+    env: {
+      ...process.env,
+      PORT: '0',
+      HOST: '127.0.0.1',
+      DATABASE_FILE: path.join(dataDir, 'e2e.sqlite'),
+      NODE_ENV: 'development',
+      LOG_LEVEL: 'warn',
+    },
     detached: true,
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
   const url = await new Promise<string>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`npm start printed no URL within 120 s:\n${output}`)), 120_000);
+    const timer = setTimeout(
+      () => reject(new Error(`npm start printed no URL within 120 s:\n${output}`)),
+      120_000,
+    );
     const onData = (chunk: Buffer) => {
       output += chunk.toString();
       const m = output.match(/serving on (http:\/\/[\d.]+:\d+)\//);
