@@ -81,8 +81,8 @@ describe('the foundation, as a person uses it in Chromium', () => {
       .getByRole('navigation', { name: 'Main' })
       .getByRole('link', { name: 'Match' })
       .click();
-    await page.getByLabel('Conductivity or resistivity').fill('28');
-    await page.getByLabel('Density (optional)').fill('8.53');
+    await page.getByLabel('Conductivity or resistivity', { exact: true }).fill('28');
+    await page.getByLabel('Density (optional)', { exact: true }).fill('8.53');
     await page.getByRole('button', { name: 'Find candidates' }).click();
     const list = page.getByRole('list', { name: 'Candidates, best first' });
     await list.waitFor();
@@ -94,10 +94,12 @@ describe('the foundation, as a person uses it in Chromium', () => {
   });
 
   it('keeps what was typed and names the problem when the reading is bad', async () => {
-    await page.getByLabel('Conductivity or resistivity').fill('-4');
+    await page.getByLabel('Conductivity or resistivity', { exact: true }).fill('-4');
     await page.getByRole('button', { name: 'Find candidates' }).click();
     await page.getByText('conductivity must be greater than zero').waitFor();
-    expect(await page.getByLabel('Conductivity or resistivity').inputValue()).toBe('-4');
+    expect(await page.getByLabel('Conductivity or resistivity', { exact: true }).inputValue()).toBe(
+      '-4',
+    );
   });
 
   it('serves the API reference at /api/docs/', async () => {

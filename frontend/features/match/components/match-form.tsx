@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { unitLabel } from '../../../../shared/units/codes';
+import { inputClass, QuantityInput } from '../../../components/quantity-input';
 import type { Reading } from '../../../lib/api-types';
 import { formatEditable } from '../../../lib/format';
 import {
@@ -15,9 +15,6 @@ import type { MatchRequest } from '../../../../shared/schemas/match-request';
 const electricalUnits = ['%IACS', 'MS/m', 'S/m', 'uohm_cm', 'nohm_m', 'ohm_m'];
 const temperatureUnits = ['C', 'K', 'F'];
 const densityUnits = ['g/cm3', 'kg/m3', 'lb/in3'];
-
-const inputClass =
-  'w-full rounded border border-patina-300 bg-white px-2 py-1.5 aria-[invalid=true]:border-copper-500 aria-[invalid=true]:bg-copper-100';
 
 function FieldMessage({
   id,
@@ -98,94 +95,41 @@ export function MatchForm({ readings, pending, onSubmit }: Props) {
         </label>
       ) : null}
 
-      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Conductivity or resistivity</span>
-          <input
-            className={inputClass}
-            inputMode="decimal"
-            autoFocus
-            aria-invalid={errors.conductivityValue ? true : undefined}
-            aria-describedby="conductivity-msg"
-            {...register('conductivityValue')}
-          />
-          <FieldMessage
-            id="conductivity-msg"
-            error={errors.conductivityValue}
-            hint="As the instrument shows it."
-          />
-        </label>
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Unit</span>
-          <select className={inputClass} {...register('conductivityUnit')}>
-            {electricalUnits.map((u) => (
-              <option key={u} value={u}>
-                {unitLabel(u)}
-              </option>
-            ))}
-          </select>
-        </label>
-      </div>
+      <QuantityInput
+        id="conductivity"
+        label="Conductivity or resistivity"
+        hint="As the instrument shows it."
+        error={errors.conductivityValue}
+        value={register('conductivityValue')}
+        unit={register('conductivityUnit')}
+        units={electricalUnits}
+        autoFocus
+      />
+      <QuantityInput
+        id="temperature"
+        label="Temperature of the piece"
+        hint="Leave empty if unknown: taken as the table's 20 °C."
+        error={errors.temperatureValue}
+        value={register('temperatureValue')}
+        unit={register('temperatureUnit')}
+        units={temperatureUnits}
+      />
+      <QuantityInput
+        id="density"
+        label="Density (optional)"
+        hint="From mass and volume; sharpens the ranking."
+        error={errors.densityValue}
+        value={register('densityValue')}
+        unit={register('densityUnit')}
+        units={densityUnits}
+      />
 
-      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Temperature of the piece</span>
-          <input
-            className={inputClass}
-            inputMode="decimal"
-            aria-invalid={errors.temperatureValue ? true : undefined}
-            aria-describedby="temperature-msg"
-            {...register('temperatureValue')}
-          />
-          <FieldMessage
-            id="temperature-msg"
-            error={errors.temperatureValue}
-            hint="Leave empty if unknown: taken as the table's 20 °C."
-          />
+      <div className="flex flex-col gap-1 text-sm sm:w-48">
+        <label htmlFor="uncertainty" className="font-medium">
+          Reading uncertainty (%)
         </label>
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Unit</span>
-          <select className={inputClass} {...register('temperatureUnit')}>
-            {temperatureUnits.map((u) => (
-              <option key={u} value={u}>
-                {unitLabel(u)}
-              </option>
-            ))}
-          </select>
-        </label>
-      </div>
-
-      <div className="grid gap-3 sm:grid-cols-[1fr_8rem]">
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Density (optional)</span>
-          <input
-            className={inputClass}
-            inputMode="decimal"
-            aria-invalid={errors.densityValue ? true : undefined}
-            aria-describedby="density-msg"
-            {...register('densityValue')}
-          />
-          <FieldMessage
-            id="density-msg"
-            error={errors.densityValue}
-            hint="From mass and volume; sharpens the ranking."
-          />
-        </label>
-        <label className="flex flex-col gap-1 text-sm">
-          <span className="font-medium">Unit</span>
-          <select className={inputClass} {...register('densityUnit')}>
-            {densityUnits.map((u) => (
-              <option key={u} value={u}>
-                {unitLabel(u)}
-              </option>
-            ))}
-          </select>
-        </label>
-      </div>
-
-      <label className="flex flex-col gap-1 text-sm sm:w-48">
-        <span className="font-medium">Reading uncertainty (%)</span>
         <input
+          id="uncertainty"
           className={inputClass}
           inputMode="decimal"
           aria-invalid={errors.uncertaintyPercent ? true : undefined}
@@ -197,7 +141,7 @@ export function MatchForm({ readings, pending, onSubmit }: Props) {
           error={errors.uncertaintyPercent}
           hint="One standard uncertainty."
         />
-      </label>
+      </div>
 
       <button
         type="submit"
