@@ -1,0 +1,210 @@
+import {
+  coilInAirInductance,
+  impedanceAt,
+  type ConductorLayer,
+  type DoddDeedsKernel,
+} from './dodd-deeds';
+
+export interface ApparentConductivityPoint {
+  frequencyHz: number;
+  apparentConductivitySPerM: number;
+  /** |ΔZn(fit) − ΔZn(stack)| / |ΔZn(stack)| in the normalised impedance plane. */
+  fitResidual: number;
+  /** The stack's own normalised impedance at this frequency. */
+  normalizedResistance: number;
+  normalizedReactance: number;
+}
+
+export interface ConductivityLimits {
+  /** Σσd/Σd over the layers: the low-frequency limit of a finite stack (null with a half-space). */
+  thicknessWeightedMeanSPerM: number | null;
+  /** The face layer's σ: the high-frequency limit. */
+  surfaceLayerSPerM: number;
+  /** What the reading tends to at low frequency: the weighted mean, or the half-space's σ. */
+  lowFrequencySPerM: number;
+}
+
+/** Conductivities an instrument calibrated on non-magnetic blocks can report, S/m. */
+const SIGMA_RANGE: [number, number] = [1e5, 2e8];
+/** Grid density of the homogeneous reference curve, points per decade of ωσ. */
+const POINTS_PER_DECADE = 60;
+
+export function conductivityLimits(layers: ConductorLayer[]): ConductivityLimits {
+  const halfSpace = layers.at(-1)!.thicknessM === null;
+  let sd = 0;
+  let d = 0;
+  for (const l of layers) {
+    if (l.thicknessM === null) continue;
+    sd += l.conductivitySPerM * l.thicknessM;
+    d += l.thicknessM;
+  }
+  const mean = halfSpace ? null : sd / d;
+  return {
+    thicknessWeightedMeanSPerM: mean,
+    surfaceLayerSPerM: layers[0]!.conductivitySPerM,
+    lowFrequencySPerM: mean ?? layers.at(-1)!.conductivitySPerM,
+  };
+}
+
+type Curve = { logP: Float64Array; re: Float64Array; im: Float64Array };
+
+/**
+ * The homogeneous, non-magnetic reference plate of the stack's thickness, as normalised ΔZ
+ * against log(ωσ): for such a plate α₁ = √(α² + jωµ0σ) depends on ω and σ only through their
+ * product, and ΔZ/X0 does not depend on ω otherwise, so one curve serves every frequency.
+ */
+function referenceCurve(
+  kernel: DoddDeedsKernel,
+  thicknessM: number | null,
+  pMin: number,
+  pMax: number,
+  l0: number,
+): Curve {
+  const decades = Math.log10(pMax / pMin);
+  const n = Math.max(8, Math.ceil(decades * POINTS_PER_DECADE));
+  const logP = new Float64Array(n);
+  const re = new Float64Array(n);
+  const im = new Float64Array(n);
+  const f = 1 / (2 * Math.PI); // ω = 1: the conductivity of the layer is then ωσ itself
+  for (let i = 0; i < n; i++) {
+    logP[i] = Math.log(pMin) + (i / (n - 1)) * Math.log(pMax / pMin);
+    const p = impedanceAt(
+      kernel,
+      [{ conductivitySPerM: Math.exp(logP[i]!), relativePermeability: 1, thicknessM }],
+      f,
+      l0,
+    );
+    re[i] = p.normalizedResistance;
+    im[i] = p.normalizedReactance - 1;
+  }
+  return { logP, re, im };
+}
+
+/** Catmull–Rom interpolation of the curve at a fractional index. */
+function curveAt(c: Curve, x: number): [number, number] {
+  const n = c.re.length;
+  const i = Math.min(n - 2, Math.max(0, Math.floor(x)));
+  const t = x - i;
+  const at = (arr: Float64Array, k: number) => arr[Math.min(n - 1, Math.max(0, k))]!;
+  const cr = (arr: Float64Array) => {
+    const p0 = at(arr, i - 1);
+    const p1 = at(arr, i);
+    const p2 = at(arr, i + 1);
+    const p3 = at(arr, i + 2);
+    return (
+      0.5 *
+      (2 * p1 +
+        (-p0 + p2) * t +
+        (2 * p0 - 5 * p1 + 4 * p2 - p3) * t * t +
+        (-p0 + 3 * p1 - 3 * p2 + p3) * t * t * t)
+    );
+  };
+  return [cr(c.re), cr(c.im)];
+}
+
+/** Golden-section search for the curve point nearest the target, on [lo, hi] in index units. */
+function nearestOnCurve(c: Curve, tRe: number, tIm: number, lo: number, hi: number): number {
+  const dist = (x: number) => {
+    const [re, im] = curveAt(c, x);
+    return (re - tRe) ** 2 + (im - tIm) ** 2;
+  };
+  const g = (Math.sqrt(5) - 1) / 2;
+  let a = lo;
+  let b = hi;
+  let x1 = b - g * (b - a);
+  let x2 = a + g * (b - a);
+  let f1 = dist(x1);
+  let f2 = dist(x2);
+  for (let k = 0; k < 60 && b - a > 1e-7; k++) {
+    if (f1 < f2) {
+      b = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = b - g * (b - a);
+      f1 = dist(x1);
+    } else {
+      a = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = a + g * (b - a);
+      f2 = dist(x2);
+    }
+  }
+  return (a + b) / 2;
+}
+
+export interface SweepOptions {
+  /** Called after each frequency with the fraction done, for a progress bar. */
+  onProgress?: (fraction: number) => void;
+  /** Throws once performance.now() passes it, so a request cannot run unbounded. */
+  deadline?: number;
+}
+
+export class ComputeTimeExceededError extends Error {
+  constructor() {
+    super(
+      'the calculation exceeded its compute time limit: ask for fewer points, layers or filaments',
+    );
+    this.name = 'ComputeTimeExceededError';
+  }
+}
+
+/**
+ * Apparent conductivity of a layered blank at each frequency: the σ of a homogeneous,
+ * non-magnetic plate of the same total thickness (or a half-space) that gives the nearest
+ * normalised ΔZ with the same coil and lift-off, by least squares in the normalised impedance
+ * plane; the way an instrument calibrated on homogeneous reference blocks reads it (ASTM E1004
+ * practice; method after Dodd & Deeds 1968). It tends to the thickness-weighted mean at low
+ * frequency and to the face layer at high frequency; `fitResidual` says how far the real stack
+ * lies from any homogeneous plate (large for magnetic cores).
+ */
+export function apparentConductivitySweep(
+  kernel: DoddDeedsKernel,
+  layers: ConductorLayer[],
+  frequenciesHz: number[],
+  options: SweepOptions = {},
+): ApparentConductivityPoint[] {
+  const l0 = coilInAirInductance(kernel);
+  const thickness =
+    layers.at(-1)!.thicknessM === null ? null : layers.reduce((s, l) => s + (l.thicknessM ?? 0), 0);
+  const omegas = frequenciesHz.map((f) => 2 * Math.PI * f);
+  const pMin = Math.min(...omegas) * SIGMA_RANGE[0];
+  const pMax = Math.max(...omegas) * SIGMA_RANGE[1];
+  const curve = referenceCurve(kernel, thickness, pMin, pMax, l0);
+  const n = curve.re.length;
+  const points: ApparentConductivityPoint[] = [];
+  for (const [index, frequencyHz] of frequenciesHz.entries()) {
+    if (options.deadline !== undefined && performance.now() > options.deadline)
+      throw new ComputeTimeExceededError();
+    const omega = omegas[index]!;
+    const stack = impedanceAt(kernel, layers, frequencyHz, l0);
+    const tRe = stack.normalizedResistance;
+    const tIm = stack.normalizedReactance - 1;
+    // Only ωσ within this frequency's σ range may be chosen.
+    const toIndex = (p: number) =>
+      ((Math.log(p) - curve.logP[0]!) / (curve.logP[n - 1]! - curve.logP[0]!)) * (n - 1);
+    const lo = Math.max(0, toIndex(omega * SIGMA_RANGE[0]));
+    const hi = Math.min(n - 1, toIndex(omega * SIGMA_RANGE[1]));
+    let best = Math.round(lo);
+    let bestDist = Infinity;
+    for (let i = Math.ceil(lo); i <= Math.floor(hi); i++) {
+      const dd = (curve.re[i]! - tRe) ** 2 + (curve.im[i]! - tIm) ** 2;
+      if (dd < bestDist) {
+        bestDist = dd;
+        best = i;
+      }
+    }
+    const x = nearestOnCurve(curve, tRe, tIm, Math.max(lo, best - 1), Math.min(hi, best + 1));
+    const [fRe, fIm] = curveAt(curve, x);
+    const logP = curve.logP[0]! + (x / (n - 1)) * (curve.logP[n - 1]! - curve.logP[0]!);
+    points.push({
+      frequencyHz,
+      apparentConductivitySPerM: Math.exp(logP) / omega,
+      fitResidual: Math.hypot(fRe - tRe, fIm - tIm) / Math.hypot(tRe, tIm),
+      normalizedResistance: stack.normalizedResistance,
+      normalizedReactance: stack.normalizedReactance,
+    });
+    options.onProgress?.((index + 1) / frequenciesHz.length);
+  }
+  return points;
+}

@@ -1,0 +1,486 @@
+import {
+  coilFilaments,
+  selfInductanceFromFilaments,
+  windingResistance,
+  type CoilGeometry,
+  type Filament,
+} from './coil';
+import { STANDARD_GRAVITY } from './constants';
+import {
+  mutualInductance,
+  mutualInductanceAndGradient,
+  rectangleGmd,
+  thinRingSelfInductance,
+} from './maxwell';
+import { integrateRk45, StepLimitError } from './rk45';
+import { stackMass, type Stack } from './stack';
+import { ComputeTimeExceededError } from './apparent-conductivity';
+import { skinDepth } from './skin-depth';
+
+export interface CapacitorBank {
+  capacitanceF: number;
+  voltageV: number;
+  /** Switch, leads and capacitor ESR, Ω; the winding's own resistance is added to it. */
+  seriesResistanceOhm: number;
+}
+
+export interface DriveCoil extends CoilGeometry {
+  wireDiameterM: number;
+  conductorSPerM: number;
+}
+
+export interface FilamentCounts {
+  coilRadial: number;
+  coilAxial: number;
+  blankRadial: number;
+  /** Filaments through the thickness of each layer. */
+  blankPerLayer: number;
+}
+
+export interface LaunchInput {
+  bank: CapacitorBank;
+  coil: DriveCoil;
+  /** The blank; its first layer faces the coil. */
+  blank: Stack;
+  /** Coil face to blank face, m. */
+  gapM: number;
+  /** Elevation of the launcher's axis above horizontal, degrees (90: straight up). */
+  launchAngleDeg: number;
+  filaments?: Partial<FilamentCounts>;
+  deadline?: number;
+  /** Time-series points kept (thinned evenly in time). */
+  seriesPoints?: number;
+}
+
+export interface LaunchSeriesPoint {
+  timeS: number;
+  coilCurrentA: number;
+  forceN: number;
+  displacementM: number;
+  speedMPerS: number;
+}
+
+export interface LaunchResult {
+  peakCurrentA: number;
+  peakCurrentTimeS: number;
+  peakForceN: number;
+  impulseNs: number;
+  exitSpeedMPerS: number;
+  heightM: number;
+  rangeM: number;
+  efficiency: number;
+  massKg: number;
+  coilInductanceH: number;
+  circuitResistanceOhm: number;
+  endTimeS: number;
+  energy: {
+    storedJ: number;
+    coilLossJ: number;
+    blankLossJ: number;
+    kineticJ: number;
+    residualJ: number;
+    imbalanceJ: number;
+  };
+  series: LaunchSeriesPoint[];
+  /** What the model leaves out for this blank, in plain words. */
+  warnings: string[];
+}
+
+export const DEFAULT_FILAMENTS: FilamentCounts = {
+  coilRadial: 4,
+  coilAxial: 4,
+  blankRadial: 8,
+  blankPerLayer: 2,
+};
+
+interface BlankFilament extends Filament {
+  resistanceOhm: number;
+}
+
+/** A slab of the blank that one ring of filaments stands for: one or more layers in parallel. */
+interface Slice {
+  zCentreM: number;
+  thicknessM: number;
+  /** Σσt of the layers in it, S (sheet conductance). */
+  sheetConductanceS: number;
+}
+
+/**
+ * Cuts the blank into slabs through its thickness. A layer thick against its skin depth at the
+ * pulse's frequency gets up to `perLayer` slabs (no thinner than a radial cell); a layer much
+ * thinner than its skin depth carries the same field as its neighbour and joins that neighbour's
+ * nearest slab as a parallel conductance. Slicing a plating micrometres thick into filaments of
+ * its own would make the circuit stiff (time constants far below the pulse's) for no gain.
+ */
+function blankSlices(
+  blank: Stack,
+  gapM: number,
+  cellWidthM: number,
+  perLayer: number,
+  pulseHz: number,
+): Slice[] {
+  type Part = { z0: number; t: number; sigma: number; thin: boolean };
+  const parts: Part[] = [];
+  let z = gapM;
+  for (const l of blank.layers) {
+    const delta = skinDepth(pulseHz, l.conductivitySPerM, 1);
+    parts.push({
+      z0: z,
+      t: l.thicknessM,
+      sigma: l.conductivitySPerM,
+      thin: l.thicknessM < Math.min(cellWidthM, delta) / 3,
+    });
+    z += l.thicknessM;
+  }
+  const slices: Array<{ z0: number; z1: number; g: number; gz: number }> = [];
+  const pendingThin: Part[] = [];
+  const absorb = (slice: (typeof slices)[number], part: Part) => {
+    slice.z0 = Math.min(slice.z0, part.z0);
+    slice.z1 = Math.max(slice.z1, part.z0 + part.t);
+    slice.g += part.sigma * part.t;
+    slice.gz += part.sigma * part.t * (part.z0 + part.t / 2);
+  };
+  for (const part of parts) {
+    if (part.thin) {
+      if (slices.length) absorb(slices.at(-1)!, part);
+      else pendingThin.push(part);
+      continue;
+    }
+    const n = Math.min(perLayer, Math.max(1, Math.ceil(part.t / cellWidthM)));
+    for (let j = 0; j < n; j++) {
+      const z0 = part.z0 + (j * part.t) / n;
+      const t = part.t / n;
+      slices.push({ z0, z1: z0 + t, g: part.sigma * t, gz: part.sigma * t * (z0 + t / 2) });
+      if (pendingThin.length) pendingThin.splice(0).forEach((p) => absorb(slices.at(-1)!, p));
+    }
+  }
+  if (!slices.length) {
+    // Every layer is thin: the blank is one slab.
+    const first = pendingThin.shift()!;
+    slices.push({
+      z0: first.z0,
+      z1: first.z0 + first.t,
+      g: first.sigma * first.t,
+      gz: first.sigma * first.t * (first.z0 + first.t / 2),
+    });
+    pendingThin.forEach((p) => absorb(slices[0]!, p));
+  }
+  return slices.map((sl) => ({
+    zCentreM: sl.gz / sl.g,
+    thicknessM: sl.z1 - sl.z0,
+    sheetConductanceS: sl.g,
+  }));
+}
+
+/**
+ * The blank as annular filaments: radially, and through its thickness slab by slab. Annulus
+ * resistance 2π/[G·ln(ro/ri)] with G = Σσt of the slab (2π/[σ·t·ln(ro/ri)] for one layer); the
+ * innermost (ri = 0) uses the thin-ring 2πr/(G·Δr) instead.
+ */
+function blankFilaments(slices: Slice[], radiusM: number, radial: number): BlankFilament[] {
+  const dr = radiusM / radial;
+  const out: BlankFilament[] = [];
+  for (const slice of slices) {
+    for (let i = 0; i < radial; i++) {
+      const ri = i * dr;
+      const ro = (i + 1) * dr;
+      const rm = (ri + ro) / 2;
+      const g = slice.sheetConductanceS;
+      const resistanceOhm =
+        i === 0 ? (2 * Math.PI * rm) / (g * dr) : (2 * Math.PI) / (g * Math.log(ro / ri));
+      out.push({
+        radiusM: rm,
+        zM: slice.zCentreM,
+        turns: 1,
+        gmdM: rectangleGmd(dr, slice.thicknessM),
+        resistanceOhm,
+      });
+    }
+  }
+  return out;
+}
+
+/** Inverse of a small dense symmetric matrix by Gauss–Jordan with partial pivoting. */
+function invert(matrix: Float64Array, n: number): Float64Array {
+  const a = Float64Array.from(matrix);
+  const inv = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) inv[i * n + i] = 1;
+  for (let c = 0; c < n; c++) {
+    let p = c;
+    for (let r = c + 1; r < n; r++) if (Math.abs(a[r * n + c]!) > Math.abs(a[p * n + c]!)) p = r;
+    if (p !== c) {
+      for (let j = 0; j < n; j++) {
+        [a[c * n + j], a[p * n + j]] = [a[p * n + j]!, a[c * n + j]!];
+        [inv[c * n + j], inv[p * n + j]] = [inv[p * n + j]!, inv[c * n + j]!];
+      }
+    }
+    const d = a[c * n + c]!;
+    for (let j = 0; j < n; j++) {
+      a[c * n + j]! /= d;
+      inv[c * n + j]! /= d;
+    }
+    for (let r = 0; r < n; r++) {
+      if (r === c) continue;
+      const f = a[r * n + c]!;
+      if (f === 0) continue;
+      for (let j = 0; j < n; j++) {
+        a[r * n + j]! -= f * a[c * n + j]!;
+        inv[r * n + j]! -= f * inv[c * n + j]!;
+      }
+    }
+  }
+  return inv;
+}
+
+/**
+ * A capacitor discharging through a drive coil under a conducting blank: coupled circuits, one
+ * per filament (the filament method used in published induction-launcher models, e.g. Andrews &
+ * Devine, IEEE Trans. Magn. 27, 639, 1991):
+ *   q̇ = −i1;  L1·i̇1 + Σ Mk·i̇k + v·Σ M′k·ik + R1·i1 = q/C;
+ *   Lk·i̇k + Mk·i̇1 + Σj Mkj·i̇j + v·M′k·i1 + Rk·ik = 0;
+ *   m·v̇ = i1·Σ ik·M′k − m·g·sin θ;  ż = v,
+ * integrated with adaptive RK45 until the blank has left the field (the circuit holds under
+ * 0.01 % of the stored energy and the force is below a thousandth of its peak, or the blank is
+ * three coil radii away). Mutuals by Maxwell,
+ * self-inductances by the thin-ring formula. The blank rests on the coil face until the force
+ * lifts it. No air drag; height and range are those of a point mass at the exit speed.
+ */
+export function simulateLaunch(input: LaunchInput): LaunchResult {
+  const counts = { ...DEFAULT_FILAMENTS, ...input.filaments };
+  const { bank, coil, blank, gapM } = input;
+  const theta = (input.launchAngleDeg * Math.PI) / 180;
+  const gAxis = STANDARD_GRAVITY * Math.sin(theta);
+  const mass = stackMass(blank);
+
+  const coilCells = coilFilaments(coil, counts.coilRadial, counts.coilAxial);
+  const l1 = selfInductanceFromFilaments(coilCells);
+  const r1 =
+    bank.seriesResistanceOhm + windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
+  const pulseHz = 1 / (2 * Math.PI * Math.sqrt(l1 * bank.capacitanceF));
+  const slices = blankSlices(
+    blank,
+    gapM,
+    blank.diameterM / 2 / counts.blankRadial,
+    counts.blankPerLayer,
+    pulseHz,
+  );
+  const cells = blankFilaments(slices, blank.diameterM / 2, counts.blankRadial);
+  const nb = cells.length;
+
+  // The blank's own inductance matrix is constant (it moves rigidly): invert it once.
+  const lb = new Float64Array(nb * nb);
+  for (let i = 0; i < nb; i++) {
+    const a = cells[i]!;
+    lb[i * nb + i] = thinRingSelfInductance(a.radiusM, a.gmdM);
+    for (let j = i + 1; j < nb; j++) {
+      const b = cells[j]!;
+      // Cells closer than their own size couple through their cross-sections, not as thin
+      // lines: the separation is widened by the cells' geometric mean distances, which keeps
+      // Mij below √(Li·Lj) and the matrix positive definite (it tends to Li as they merge).
+      const m = mutualInductance(
+        a.radiusM,
+        b.radiusM,
+        Math.sqrt((a.zM - b.zM) ** 2 + a.gmdM * b.gmdM),
+      );
+      lb[i * nb + j] = m;
+      lb[j * nb + i] = m;
+    }
+  }
+  const lbInv = invert(lb, nb);
+
+  const mk = new Float64Array(nb);
+  const dmk = new Float64Array(nb);
+  /** Coil-to-filament mutuals and their gradients with the blank displaced by s. */
+  const coupling = (s: number) => {
+    for (let k = 0; k < nb; k++) {
+      const f = cells[k]!;
+      let m = 0;
+      let dm = 0;
+      for (const c of coilCells) {
+        const [mm, dd] = mutualInductanceAndGradient(c.radiusM, f.radiusM, f.zM + s - c.zM);
+        m += c.turns * mm;
+        dm += c.turns * dd;
+      }
+      mk[k] = m;
+      dmk[k] = dm;
+    }
+  };
+
+  // State: q, i1, i_b[nb], s, v, coil loss, blank loss, impulse.
+  const iq = 0;
+  const i1 = 1;
+  const ib = 2;
+  const is = ib + nb;
+  const iv = is + 1;
+  const iec = iv + 1;
+  const ieb = iec + 1;
+  const iimp = ieb + 1;
+  const n = iimp + 1;
+  const rb = new Float64Array(nb);
+  const x = new Float64Array(nb);
+  const u = new Float64Array(nb);
+  let lastForce = 0;
+
+  const derivative = (_t: number, y: Float64Array, dy: Float64Array) => {
+    const s = y[is]!;
+    const v = y[iv]!;
+    const current = y[i1]!;
+    coupling(s);
+    let force = 0;
+    let motional = 0;
+    let blankLoss = 0;
+    for (let k = 0; k < nb; k++) {
+      const ik = y[ib + k]!;
+      force += ik * dmk[k]!;
+      motional += dmk[k]! * ik;
+      rb[k] = -cells[k]!.resistanceOhm * ik - v * dmk[k]! * current;
+      blankLoss += cells[k]!.resistanceOhm * ik * ik;
+    }
+    force *= current;
+    const rc = y[iq]! / bank.capacitanceF - r1 * current - v * motional;
+    // Block elimination: i̇b = Lb⁻¹(rb − m·i̇1); i̇1 = (rc − mᵀLb⁻¹rb)/(L1 − mᵀLb⁻¹m).
+    let mx = 0;
+    let mu = 0;
+    for (let r = 0; r < nb; r++) {
+      let sx = 0;
+      let su = 0;
+      for (let c = 0; c < nb; c++) {
+        const w = lbInv[r * nb + c]!;
+        sx += w * rb[c]!;
+        su += w * mk[c]!;
+      }
+      x[r] = sx;
+      u[r] = su;
+      mx += mk[r]! * sx;
+      mu += mk[r]! * su;
+    }
+    const di1 = (rc - mx) / (l1 - mu);
+    dy[iq] = -current;
+    dy[i1] = di1;
+    for (let k = 0; k < nb; k++) dy[ib + k] = x[k]! - u[k]! * di1;
+    let accel = force / mass - gAxis;
+    // Resting on the coil face: the support holds it until the force lifts it (and does no work).
+    if (s <= 0 && v <= 0 && accel < 0) accel = 0;
+    dy[is] = s <= 0 && v < 0 ? 0 : v;
+    dy[iv] = accel;
+    dy[iec] = r1 * current * current;
+    dy[ieb] = blankLoss;
+    dy[iimp] = force;
+    lastForce = force;
+  };
+
+  const stored = 0.5 * bank.capacitanceF * bank.voltageV ** 2;
+  const y0 = new Float64Array(n);
+  y0[iq] = bank.capacitanceF * bank.voltageV;
+  const characteristicTime = Math.sqrt(l1 * bank.capacitanceF);
+  const currentScale = bank.voltageV / Math.sqrt(l1 / bank.capacitanceF);
+  const atol = new Float64Array(n);
+  atol[iq] = 1e-9 * y0[iq]!;
+  for (let k = i1; k < is; k++) atol[k] = 1e-7 * currentScale;
+  atol[is] = 1e-9;
+  atol[iv] = 1e-7;
+  atol[iec] = atol[ieb] = 1e-9 * stored;
+  atol[iimp] = 1e-12;
+
+  let peakCurrent = 0;
+  let peakCurrentTime = 0;
+  let peakForce = 0;
+  const samples: LaunchSeriesPoint[] = [];
+  const exitDistance = 3 * coil.outerRadiusM;
+  const maxTime = Math.max(200 * characteristicTime, 1e-3);
+  let result;
+  try {
+    result = integrateRk45(derivative, 0, y0, {
+      rtol: 1e-6,
+      atol,
+      firstStep: characteristicTime * 1e-3,
+      // Small enough that the sampled peaks of current and force sit within a few per cent of LC time.
+      maxStep: characteristicTime / 16,
+      maxSteps: 200_000,
+      deadline: input.deadline,
+      onStep: (t, y) => {
+        const current = Math.abs(y[i1]!);
+        if (current > peakCurrent) {
+          peakCurrent = current;
+          peakCurrentTime = t;
+        }
+        peakForce = Math.max(peakForce, lastForce);
+        samples.push({
+          timeS: t,
+          coilCurrentA: y[i1]!,
+          forceN: lastForce,
+          displacementM: y[is]!,
+          speedMPerS: y[iv]!,
+        });
+        // Done when the circuit holds almost none of the stored energy and the force has died
+        // away (a current zero alone is not enough: an underdamped bank swings back).
+        const left = (0.5 * y[iq]! ** 2) / bank.capacitanceF + 0.5 * l1 * y[i1]! ** 2;
+        const settled =
+          t > peakCurrentTime && left < 1e-4 * stored && Math.abs(lastForce) < 1e-3 * peakForce;
+        return settled || y[is]! > exitDistance || t > maxTime;
+      },
+    });
+  } catch (error) {
+    if (error instanceof StepLimitError) throw new ComputeTimeExceededError();
+    throw error;
+  }
+  const { t: endTime, y } = result;
+
+  // What is left: charge on the capacitor, the field of the circuits, and height gained.
+  coupling(y[is]!);
+  const currents = Array.from({ length: nb }, (_, k) => y[ib + k]!);
+  let magnetic = 0.5 * l1 * y[i1]! ** 2;
+  for (let k = 0; k < nb; k++) {
+    magnetic += mk[k]! * y[i1]! * currents[k]!;
+    for (let j = 0; j < nb; j++) magnetic += 0.5 * lb[k * nb + j]! * currents[k]! * currents[j]!;
+  }
+  const speed = Math.max(0, y[iv]!);
+  const kinetic = 0.5 * mass * y[iv]! ** 2;
+  const residual = (0.5 * y[iq]! ** 2) / bank.capacitanceF + magnetic + mass * gAxis * y[is]!;
+  const coilLoss = y[iec]!;
+  const blankLoss = y[ieb]!;
+  return {
+    peakCurrentA: peakCurrent,
+    peakCurrentTimeS: peakCurrentTime,
+    peakForceN: peakForce,
+    impulseNs: y[iimp]!,
+    exitSpeedMPerS: speed,
+    heightM: (speed * Math.sin(theta)) ** 2 / (2 * STANDARD_GRAVITY),
+    rangeM: (speed * speed * Math.sin(2 * theta)) / STANDARD_GRAVITY,
+    efficiency: kinetic / stored,
+    massKg: mass,
+    coilInductanceH: l1,
+    circuitResistanceOhm: r1,
+    endTimeS: endTime,
+    energy: {
+      storedJ: stored,
+      coilLossJ: coilLoss,
+      blankLossJ: blankLoss,
+      kineticJ: kinetic,
+      residualJ: residual,
+      imbalanceJ: stored - coilLoss - blankLoss - kinetic - residual,
+    },
+    series: thin(samples, input.seriesPoints ?? 300),
+    warnings: blank.layers.some((l) => l.relativePermeability > 1.05)
+      ? [
+          'A layer is magnetic: the model treats it as non-magnetic. A ferromagnetic blank is also pulled toward the coil, so it flies lower than shown, or not at all.',
+        ]
+      : [],
+  };
+}
+
+/** Keeps about `count` samples, evenly spaced in time, always the first and the last. */
+function thin(samples: LaunchSeriesPoint[], count: number): LaunchSeriesPoint[] {
+  if (samples.length <= count) return samples;
+  const end = samples.at(-1)!.timeS;
+  const out: LaunchSeriesPoint[] = [];
+  let next = 0;
+  for (const s of samples) {
+    if (s.timeS >= next) {
+      out.push(s);
+      next = s.timeS + end / count;
+    }
+  }
+  if (out.at(-1) !== samples.at(-1)) out.push(samples.at(-1)!);
+  return out;
+}

@@ -1,0 +1,114 @@
+import { describe, expect, it } from 'vitest';
+import fixture from '../../fixtures/physics/launch.json';
+import { awgDiameter } from '../../../shared/physics/awg';
+import { simulateLaunch, type LaunchInput } from '../../../shared/physics/launch';
+import type { StackLayer } from '../../../shared/physics/stack';
+
+const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
+const layer = (iacs: number, density: number, t: number): StackLayer => ({
+  conductivitySPerM: iacs * 0.58e6,
+  relativePermeability: 1,
+  densityKgPerM3: density,
+  thicknessM: t,
+});
+
+const f = fixture.case;
+/** The fixture's case: 50 µF at 400 V into 100 turns of AWG 26, a 23 mm gilding-metal blank. */
+const base: LaunchInput = {
+  bank: { capacitanceF: f.bank.C, voltageV: f.bank.V, seriesResistanceOhm: f.bank.R },
+  coil: {
+    innerRadiusM: f.coil.r1,
+    outerRadiusM: f.coil.r2,
+    lengthM: f.coil.h,
+    turns: f.coil.n,
+    wireDiameterM: awgDiameter(26),
+    conductorSPerM: 58e6,
+  },
+  blank: { diameterM: f.blank.D, layers: [layer(56, f.blank.rho, f.blank.t)] },
+  gapM: f.gap,
+  launchAngleDeg: 90,
+};
+const solid = simulateLaunch(base);
+
+describe('pulsed launch against the SciPy solve_ivp fixture of the same model', () => {
+  it('has the same drive-coil inductance (filament sum), within 1e-9', () => {
+    expect(rel(solid.coilInductanceH, fixture.result.L1)).toBeLessThan(1e-9);
+  });
+  it('peaks at the same current within 0.5 % and the same time within 5 %', () => {
+    expect(rel(solid.peakCurrentA, fixture.result.peakCurrentA)).toBeLessThan(0.005);
+    expect(rel(solid.peakCurrentTimeS, fixture.result.peakCurrentTimeS)).toBeLessThan(0.05);
+  });
+  it('leaves at the same speed within 1 %', () => {
+    expect(rel(solid.exitSpeedMPerS, fixture.result.speedAtEndMPerS)).toBeLessThan(0.01);
+  });
+});
+
+describe('pulsed launch properties', () => {
+  it('balances its energy ledger within 1 % of the stored energy', () => {
+    const e = solid.energy;
+    expect(
+      Math.abs(e.storedJ - e.coilLossJ - e.blankLossJ - e.kineticJ - e.residualJ) / e.storedJ,
+    ).toBeLessThan(0.01);
+    expect(Math.abs(e.imbalanceJ) / e.storedJ).toBeLessThan(0.01);
+  });
+
+  it('changes the exit speed by less than 2 % with more filaments', () => {
+    const finer = simulateLaunch({
+      ...base,
+      filaments: { coilRadial: 6, coilAxial: 6, blankRadial: 12, blankPerLayer: 3 },
+    });
+    expect(rel(finer.exitSpeedMPerS, solid.exitSpeedMPerS)).toBeLessThan(0.02);
+  });
+
+  it('stops once the blank has left the field, with a time series to draw', () => {
+    expect(solid.series.length).toBeGreaterThan(20);
+    expect(solid.series.length).toBeLessThanOrEqual(302);
+    expect(solid.endTimeS).toBeGreaterThan(solid.peakCurrentTimeS);
+    expect(solid.impulseNs).toBeGreaterThan(0);
+  });
+
+  it('throws with a range of zero when launched straight up, and the height from the exit speed', () => {
+    expect(solid.rangeM).toBeCloseTo(0, 12);
+    expect(solid.heightM).toBeCloseTo(solid.exitSpeedMPerS ** 2 / (2 * 9.80665), 12);
+    const angled = simulateLaunch({ ...base, launchAngleDeg: 45 });
+    expect(angled.rangeM).toBeGreaterThan(0);
+  });
+
+  it('warns that a magnetic layer is outside the model', () => {
+    const steel = simulateLaunch({
+      ...base,
+      blank: {
+        diameterM: 21e-3,
+        layers: [{ ...layer(12, 7870, 1.6e-3), relativePermeability: 100 }],
+      },
+    });
+    expect(steel.warnings[0]).toMatch(/magnetic/);
+  });
+});
+
+describe('trade facts (common practice, no source)', () => {
+  it('50 µF at 400 V stores 4 J (½CV², arithmetic)', () => {
+    expect(solid.energy.storedJ).toBeCloseTo(4, 12);
+  });
+
+  it('a 100-turn fine-wire coil on that bank peaks in the order of 100 A and is under 1 % efficient', () => {
+    expect(solid.peakCurrentA).toBeGreaterThan(30);
+    expect(solid.peakCurrentA).toBeLessThan(300);
+    expect(solid.efficiency).toBeLessThan(0.01);
+  });
+
+  it('a solid high-conductivity copper-alloy blank rises several times higher than a copper-plated zinc one', () => {
+    const copper = simulateLaunch({
+      ...base,
+      blank: { diameterM: 23e-3, layers: [layer(100, 8890, 1.75e-3)] },
+    });
+    const platedZinc = simulateLaunch({
+      ...base,
+      blank: {
+        diameterM: 23e-3,
+        layers: [layer(100, 8890, 8e-6), layer(27.5, 7140, 1.734e-3), layer(100, 8890, 8e-6)],
+      },
+    });
+    expect(copper.heightM / platedZinc.heightM).toBeGreaterThan(2.5);
+  });
+});
