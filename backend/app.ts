@@ -9,12 +9,15 @@ import swaggerUi from 'swagger-ui-express';
 import { loadApiDocument } from './api-document';
 import { createAlloyRepository } from './db/alloy-repository';
 import { createReadingRepository } from './db/reading-repository';
+import { createStackRepository } from './db/stack-repository';
 import { apiNotFound, problemHandler } from './http/problem';
 import { clientDist } from './paths';
 import { alloysRouter } from './routes/alloys';
+import { estimatesRouter } from './routes/estimates';
 import { healthRouter } from './routes/health';
 import { matchRouter } from './routes/match';
 import { readingsRouter } from './routes/readings';
+import { stacksRouter } from './routes/stacks';
 import { CatalogueStore } from './services/catalogue-store';
 
 export interface AppOptions {
@@ -70,6 +73,8 @@ export function createApp(options: AppOptions): Express {
   v1.use(alloysRouter(catalogue));
   v1.use(matchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
+  v1.use(stacksRouter(createStackRepository(knex), catalogue));
+  v1.use(estimatesRouter(catalogue));
   app.use('/api/v1', v1);
   app.use('/api', apiNotFound);
 

@@ -94,6 +94,102 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/stacks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Built-in stacks (the demo scenario's coins, marked invented) */
+        get: operations["listStacks"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/estimates/skin-depth": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Standard depth of penetration of a material at each frequency */
+        post: operations["estimateSkinDepth"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/estimates/impedance": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Impedance of an air-core coil over a layered conductor (Dodd–Deeds) */
+        post: operations["estimateImpedance"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/estimates/apparent-conductivity": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * What an instrument calibrated on homogeneous blocks reads from a layered blank
+         * @description The σ of a homogeneous, non-magnetic plate of the same total thickness whose normalised
+         *     ΔZ lies nearest the stack's (least squares in the normalised impedance plane), with the
+         *     residual of that fit and the two limits.
+         */
+        post: operations["estimateApparentConductivity"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/estimates/launch": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Launch of a blank from a capacitor-discharge coil
+         * @description Coupled circuits of the bank, the drive coil and the blank as annular filaments,
+         *     integrated with adaptive RK45 until the blank has left the field. No air drag.
+         *     A charged capacitor bank can kill: bleed resistors, discharge before touching, insulated
+         *     tools, interlocks; follow local electrical codes and licensed practice.
+         */
+        post: operations["estimateLaunch"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -244,6 +340,161 @@ export interface components {
             /** @description Made up for the demo scenario; no real measurement. */
             invented: boolean;
         };
+        /** @enum {string} */
+        LengthUnit: "m" | "mm" | "um" | "in" | "mil" | "µm" | "μm";
+        /** @enum {string} */
+        FrequencyUnit: "Hz" | "kHz" | "MHz";
+        LengthQuantity: {
+            value: number;
+            unit: components["schemas"]["LengthUnit"];
+        };
+        /** @description A length that may be zero (a lift-off or a gap). */
+        DistanceQuantity: {
+            value: number;
+            unit: components["schemas"]["LengthUnit"];
+        };
+        FrequencyQuantity: {
+            value: number;
+            unit: components["schemas"]["FrequencyUnit"];
+        };
+        Frequencies: components["schemas"]["FrequencyQuantity"][];
+        /** @description An alloy of the table by slug, or a conductivity of your own. */
+        Material: {
+            alloy: string;
+        } | {
+            conductivity: components["schemas"]["ConductivityQuantity"];
+            relativePermeability?: number;
+            density?: components["schemas"]["DensityQuantity"];
+        };
+        /** @description A layer of a thickness, or a half-space (last layer only), listed from the face toward the coil. */
+        Layer: {
+            material: components["schemas"]["Material"];
+            thickness: components["schemas"]["LengthQuantity"];
+        } | {
+            material: components["schemas"]["Material"];
+            /** @enum {boolean} */
+            halfSpace: true;
+        };
+        Coil: {
+            innerRadius: components["schemas"]["LengthQuantity"];
+            outerRadius: components["schemas"]["LengthQuantity"];
+            length: components["schemas"]["LengthQuantity"];
+            turns: number;
+            wireDiameter?: components["schemas"]["LengthQuantity"];
+            awg?: number;
+            conductor?: components["schemas"]["Material"];
+        };
+        SensorRequest: {
+            coil: components["schemas"]["Coil"];
+            liftOff: components["schemas"]["DistanceQuantity"];
+            layers: components["schemas"]["Layer"][];
+            frequencies: components["schemas"]["Frequencies"];
+        };
+        ImpedancePoint: {
+            frequencyHz: number;
+            coilInAir: {
+                inductanceH: number;
+                reactanceOhm: number;
+            };
+            deltaZ: {
+                resistanceOhm: number;
+                reactanceOhm: number;
+            };
+            overConductor: {
+                inductanceH: number;
+                /** @description ΔR; the winding resistance is not included */
+                resistanceOhm: number;
+            };
+            normalized: {
+                /** @description ΔR/X0 */
+                resistance: number;
+                /** @description X/X0 */
+                reactance: number;
+            };
+        };
+        CapacitanceQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "F" | "uF" | "µF" | "μF";
+        };
+        VoltageQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "V" | "kV";
+        };
+        ResistanceQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "ohm" | "mohm" | "Ω" | "mΩ";
+        };
+        BlankLayer: {
+            material: components["schemas"]["Material"];
+            thickness: components["schemas"]["LengthQuantity"];
+        };
+        LaunchRequest: {
+            bank: {
+                capacitance: components["schemas"]["CapacitanceQuantity"];
+                voltage: components["schemas"]["VoltageQuantity"];
+                seriesResistance: components["schemas"]["ResistanceQuantity"];
+            };
+            coil: components["schemas"]["Coil"];
+            blank: {
+                diameter: components["schemas"]["LengthQuantity"];
+                /** @description From the face toward the coil upward; every layer needs a density. */
+                layers: components["schemas"]["BlankLayer"][];
+            };
+            gap: components["schemas"]["DistanceQuantity"];
+            /** @default 90 */
+            launchAngleDeg: number;
+            filaments?: {
+                coilRadial?: number;
+                coilAxial?: number;
+                blankRadial?: number;
+                blankPerLayer?: number;
+            };
+        };
+        LaunchResult: {
+            peakCurrentA: number;
+            peakCurrentTimeS: number;
+            peakForceN: number;
+            impulseNs: number;
+            exitSpeedMPerS: number;
+            heightM: number;
+            rangeM: number;
+            efficiency: number;
+            massKg: number;
+            coilInductanceH: number;
+            circuitResistanceOhm: number;
+            energy: {
+                storedJ: number;
+                coilLossJ: number;
+                blankLossJ: number;
+                kineticJ: number;
+                /** @description Left on the capacitor, in the field, and as height gained */
+                residualJ: number;
+            };
+            series: {
+                timeS: number;
+                coilCurrentA: number;
+                forceN: number;
+                displacementM: number;
+                speedMPerS: number;
+            }[];
+            warnings: string[];
+        };
+        BuiltInStack: {
+            slug: string;
+            name: string;
+            description: string;
+            diameterM: number;
+            layers: {
+                alloy: string;
+                thicknessM: number;
+            }[];
+            massKg: number;
+            densityKgPerM3: number;
+            invented: boolean;
+        };
     };
     responses: {
         /** @description An RFC 9457 problem. */
@@ -388,6 +639,152 @@ export interface operations {
                     "application/json": {
                         items: components["schemas"]["Reading"][];
                     };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    listStacks: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Every built-in stack with its layers, mass and mean density. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: components["schemas"]["BuiltInStack"][];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    estimateSkinDepth: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    material: components["schemas"]["Material"];
+                    frequencies: components["schemas"]["Frequencies"];
+                };
+            };
+        };
+        responses: {
+            /** @description One depth per frequency. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        points: {
+                            frequencyHz: number;
+                            skinDepthM: number;
+                        }[];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    estimateImpedance: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SensorRequest"];
+            };
+        };
+        responses: {
+            /** @description One impedance point per frequency. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        points: components["schemas"]["ImpedancePoint"][];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    estimateApparentConductivity: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SensorRequest"];
+            };
+        };
+        responses: {
+            /** @description One apparent conductivity per frequency, and the limits. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        points: {
+                            frequencyHz: number;
+                            apparentConductivitySPerM: number;
+                            apparentPercentIacs: number;
+                            /** @description Distance of the fit from the stack in the normalised plane, relative */
+                            fitResidual: number;
+                        }[];
+                        limits: {
+                            thicknessWeightedMeanSPerM: number | null;
+                            surfaceLayerSPerM: number;
+                            lowFrequencySPerM: number;
+                        };
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    estimateLaunch: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["LaunchRequest"];
+            };
+        };
+        responses: {
+            /** @description Peaks, flight, efficiency, the energy ledger and time series. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["LaunchResult"];
                 };
             };
             default: components["responses"]["Problem"];

@@ -10,6 +10,10 @@ export const densityUnits = ['kg/m3', 'g/cm3', 'lb/in3'] as const;
 export const temperatureUnits = ['C', 'K', 'F'] as const;
 export const frequencyUnits = ['Hz', 'kHz', 'MHz'] as const;
 
+export const capacitanceUnits = ['F', 'uF'] as const;
+export const voltageUnits = ['V', 'kV'] as const;
+export const resistanceUnits = ['ohm', 'mohm'] as const;
+
 export type ConductivityUnit = (typeof conductivityUnits)[number];
 export type ResistivityUnit = (typeof resistivityUnits)[number];
 export type LengthUnit = (typeof lengthUnits)[number];
@@ -26,6 +30,10 @@ export const unitAliases: Readonly<Record<string, string>> = {
   'nΩ·m': 'nohm_m',
   µm: 'um',
   μm: 'um',
+  µF: 'uF',
+  μF: 'uF',
+  Ω: 'ohm',
+  mΩ: 'mohm',
   '°C': 'C',
   '°F': 'F',
   'kg/m³': 'kg/m3',
@@ -67,7 +75,18 @@ export const unitLabels: Readonly<Record<string, string>> = {
   Hz: 'Hz',
   kHz: 'kHz',
   MHz: 'MHz',
+  // 'F' is °F here; a farad is labelled by the capacitance field itself (see capacitanceLabel).
+  uF: 'µF',
+  V: 'V',
+  kV: 'kV',
+  ohm: 'Ω',
+  mohm: 'mΩ',
 };
+
+/** Capacitance codes for people: 'F' means farad only in a capacitance field. */
+export function capacitanceLabel(unit: string): string {
+  return canonicalUnit(unit) === 'uF' ? 'µF' : 'F';
+}
 
 export function unitLabel(unit: string): string {
   return unitLabels[canonicalUnit(unit)] ?? unit;

@@ -1,3 +1,4 @@
+import { toFarads, toOhms, toVolts } from './circuit';
 import { toSiemensPerMetre } from './conductivity';
 import { toKilogramsPerCubicMetre } from './density';
 import { toHertz } from './frequency';
@@ -10,7 +11,15 @@ export interface Quantity {
   unit: string;
 }
 
-export type QuantityKind = 'conductivity' | 'length' | 'density' | 'temperature' | 'frequency';
+export type QuantityKind =
+  | 'conductivity'
+  | 'length'
+  | 'density'
+  | 'temperature'
+  | 'frequency'
+  | 'capacitance'
+  | 'voltage'
+  | 'resistance';
 
 const toSI: Record<QuantityKind, (value: number, unit: string) => number> = {
   conductivity: toSiemensPerMetre,
@@ -18,6 +27,9 @@ const toSI: Record<QuantityKind, (value: number, unit: string) => number> = {
   density: toKilogramsPerCubicMetre,
   temperature: toKelvin,
   frequency: toHertz,
+  capacitance: toFarads,
+  voltage: toVolts,
+  resistance: toOhms,
 };
 
 /** The SI value (S/m, m, kg/m³, K, Hz) of a quantity of the given kind. */

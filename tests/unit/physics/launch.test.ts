@@ -112,3 +112,11 @@ describe('trade facts (common practice, no source)', () => {
     expect(copper.heightM / platedZinc.heightM).toBeGreaterThan(2.5);
   });
 });
+
+describe('compute limit', () => {
+  it('stops with a clear error once its deadline has passed', () => {
+    expect(() => simulateLaunch({ ...base, deadline: performance.now() - 1 })).toThrow(
+      /compute time limit/,
+    );
+  });
+});

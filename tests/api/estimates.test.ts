@@ -1,0 +1,280 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Express } from 'express';
+import type { Knex } from 'knex';
+import { createTestApp } from '../helpers/test-app';
+
+let app: Express;
+let knex: Knex;
+beforeAll(async () => ({ app, knex } = await createTestApp()));
+afterAll(() => knex.destroy());
+
+const post = (path: string, body: unknown) =>
+  request(app)
+    .post(`/api/v1/estimates/${path}`)
+    .send(body as object);
+const mm = (value: number) => ({ value, unit: 'mm' });
+const um = (value: number) => ({ value, unit: 'µm' });
+const SENSOR_COIL = { innerRadius: mm(2), outerRadius: mm(4), length: mm(2), turns: 100 };
+const TEAM_COIL = { innerRadius: mm(6.15), outerRadius: mm(12.4), length: mm(6.15), turns: 3790 };
+const copper = { alloy: 'copper-c11000' };
+const zinc = { alloy: 'zinc-coinage-strip' };
+const plated = [
+  { material: copper, thickness: um(8) },
+  { material: zinc, thickness: mm(1.34) },
+  { material: copper, thickness: um(8) },
+];
+
+function expectProblem(res: request.Response, status: number, path?: string) {
+  expect(res.status, JSON.stringify(res.body)).toBe(status);
+  expect(res.type).toBe('application/problem+json');
+  if (path) expect(res.body.errors.map((e: { path: string }) => e.path)).toContain(path);
+}
+
+describe('POST /api/v1/estimates/skin-depth', () => {
+  it('valid → copper at 60 Hz is 8.53 mm (physics.md, 100 %IACS)', async () => {
+    const res = await post('skin-depth', {
+      material: { conductivity: { value: 100, unit: '%IACS' } },
+      frequencies: [
+        { value: 60, unit: 'Hz' },
+        { value: 1, unit: 'MHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.points[0].skinDepthM).toBeCloseTo(8.53e-3, 5);
+    expect(res.body.points[1].skinDepthM).toBeCloseTo(66.1e-6, 7);
+  });
+  it('an alloy of the table by slug works; an unknown one → 400 naming it', async () => {
+    const ok = await post('skin-depth', {
+      material: copper,
+      frequencies: [{ value: 10, unit: 'kHz' }],
+    });
+    expect(ok.body.points[0].skinDepthM).toBeGreaterThan(0.6e-3);
+    expectProblem(
+      await post('skin-depth', {
+        material: { alloy: 'unobtainium' },
+        frequencies: [{ value: 10, unit: 'kHz' }],
+      }),
+      400,
+      '/body/material/alloy',
+    );
+  });
+});
+
+describe('POST /api/v1/estimates/impedance', () => {
+  it('TEAM 15-1 (physics.md): L0 225.9 mH, L 178.63 mH, ΔR 120.67 Ω within 0.1 %', async () => {
+    const res = await post('impedance', {
+      coil: TEAM_COIL,
+      liftOff: mm(0.88),
+      layers: [{ material: { conductivity: { value: 30.6, unit: 'MS/m' } }, thickness: mm(12.22) }],
+      frequencies: [{ value: 900, unit: 'Hz' }],
+    });
+    expect(res.status).toBe(200);
+    const [p] = res.body.points;
+    expect(p.coilInAir.inductanceH / 225.9e-3).toBeCloseTo(1, 2);
+    expect(p.overConductor.inductanceH / 178.63e-3).toBeCloseTo(1, 2);
+    expect(p.deltaZ.resistanceOhm / 120.67).toBeCloseTo(1, 2);
+    expect(p.normalized.reactance).toBeCloseTo(
+      p.overConductor.inductanceH / p.coilInAir.inductanceH,
+      10,
+    );
+  });
+  it('accepts a half-space as the last layer and refuses one above another layer', async () => {
+    const ok = await post('impedance', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [{ material: zinc, halfSpace: true }],
+      frequencies: [{ value: 60, unit: 'kHz' }],
+    });
+    expect(ok.status).toBe(200);
+    const bad = await post('impedance', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [
+        { material: zinc, halfSpace: true },
+        { material: copper, thickness: um(8) },
+      ],
+      frequencies: [{ value: 60, unit: 'kHz' }],
+    });
+    expectProblem(bad, 400, '/body/layers/0/halfSpace');
+  });
+});
+
+describe('POST /api/v1/estimates/apparent-conductivity', () => {
+  it('a copper-plated zinc blank reads near its weighted mean at low frequency and climbs toward copper', async () => {
+    const res = await post('apparent-conductivity', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: plated,
+      frequencies: [
+        { value: 100, unit: 'Hz' },
+        { value: 60, unit: 'kHz' },
+        { value: 5, unit: 'MHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const [low, mid, high] = res.body.points;
+    expect(low.apparentConductivitySPerM / res.body.limits.thicknessWeightedMeanSPerM).toBeCloseTo(
+      1,
+      1,
+    );
+    expect(mid.apparentPercentIacs).toBeGreaterThan(low.apparentPercentIacs);
+    expect(high.apparentPercentIacs).toBeGreaterThan(mid.apparentPercentIacs);
+    expect(res.body.limits.surfaceLayerSPerM).toBeCloseTo(101 * 0.58e6, 0);
+  });
+});
+
+describe('POST /api/v1/estimates/launch', () => {
+  const launch = {
+    bank: {
+      capacitance: { value: 50, unit: 'µF' },
+      voltage: { value: 400, unit: 'V' },
+      seriesResistance: { value: 50, unit: 'mohm' },
+    },
+    coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100, awg: 26 },
+    blank: {
+      diameter: mm(23),
+      layers: [{ material: { alloy: 'gilding-metal-c21000' }, thickness: mm(1.75) }],
+    },
+    gap: mm(0.5),
+  };
+  it('valid → 4 J stored, a peak in the order of 100 A, under 1 % efficient, a balanced ledger (common practice, no source)', async () => {
+    const res = await post('launch', launch);
+    expect(res.status).toBe(200);
+    const e = res.body.energy;
+    expect(e.storedJ).toBeCloseTo(4, 10);
+    expect(res.body.peakCurrentA).toBeGreaterThan(30);
+    expect(res.body.peakCurrentA).toBeLessThan(300);
+    expect(res.body.efficiency).toBeLessThan(0.01);
+    expect(
+      Math.abs(e.storedJ - e.coilLossJ - e.blankLossJ - e.kineticJ - e.residualJ) / e.storedJ,
+    ).toBeLessThan(0.01);
+    expect(res.body.series.length).toBeGreaterThan(10);
+  });
+  it('a range for an angled launcher', async () => {
+    const res = await post('launch', { ...launch, launchAngleDeg: 45 });
+    expect(res.body.rangeM).toBeGreaterThan(0);
+  });
+  it('a material without density in a blank → 400 naming it', async () => {
+    const res = await post('launch', {
+      ...launch,
+      blank: {
+        diameter: mm(23),
+        layers: [{ material: { conductivity: { value: 50, unit: '%IACS' } }, thickness: mm(1) }],
+      },
+    });
+    expectProblem(res, 400, '/body/blank/layers/0/material/density');
+  });
+  it('both a wire diameter and an AWG → 400', async () => {
+    expectProblem(
+      await post('launch', { ...launch, coil: { ...launch.coil, wireDiameter: mm(0.4) } }),
+      400,
+      '/body/coil/awg',
+    );
+  });
+});
+
+describe('bad input to the estimators: 4xx naming the field, never a hang or a 500', () => {
+  const base = {
+    coil: SENSOR_COIL,
+    liftOff: mm(0.5),
+    layers: plated,
+    frequencies: [{ value: 60, unit: 'kHz' }],
+  };
+  it.each([
+    [
+      'zero radius',
+      { ...base, coil: { ...SENSOR_COIL, innerRadius: mm(0) } },
+      '/body/coil/innerRadius/value',
+    ],
+    [
+      'negative length',
+      { ...base, coil: { ...SENSOR_COIL, length: mm(-2) } },
+      '/body/coil/length/value',
+    ],
+    [
+      'outer radius below inner',
+      { ...base, coil: { ...SENSOR_COIL, outerRadius: mm(1) } },
+      '/body/coil/outerRadius',
+    ],
+    [
+      'NaN thickness',
+      { ...base, layers: [{ material: copper, thickness: { value: 'NaN', unit: 'mm' } }] },
+      '/body/layers/0',
+    ],
+    [
+      'zero frequency',
+      { ...base, frequencies: [{ value: 0, unit: 'Hz' }] },
+      '/body/frequencies/0/value',
+    ],
+    ['unknown unit', { ...base, liftOff: { value: 1, unit: 'furlong' } }, '/body/liftOff/unit'],
+    ['no layers', { ...base, layers: [] }, '/body/layers'],
+    [
+      '500 layers',
+      {
+        ...base,
+        layers: Array.from({ length: 500 }, () => ({ material: copper, thickness: um(8) })),
+      },
+      '/body/layers',
+    ],
+    [
+      '1000 frequencies',
+      {
+        ...base,
+        frequencies: Array.from({ length: 1000 }, (_, i) => ({ value: i + 1, unit: 'Hz' })),
+      },
+      '/body/frequencies',
+    ],
+    ['zero turns', { ...base, coil: { ...SENSOR_COIL, turns: 0 } }, '/body/coil/turns'],
+  ])('%s → 400', async (_name, body, path) => {
+    const res = await post('apparent-conductivity', body);
+    expect(res.status, JSON.stringify(res.body)).toBe(400);
+    expect(res.type).toBe('application/problem+json');
+    expect(res.body.errors.some((e: { path: string }) => e.path.startsWith(path))).toBe(true);
+  });
+
+  it('a million frequencies → 413 (body limit) before any work', async () => {
+    const res = await post('impedance', {
+      ...base,
+      frequencies: Array.from({ length: 1_000_000 }, () => ({ value: 1, unit: 'Hz' })),
+    });
+    expect(res.status).toBe(413);
+    expect(res.type).toBe('application/problem+json');
+  });
+
+  it('too many filaments → 400', async () => {
+    const res = await post('launch', {
+      bank: {
+        capacitance: { value: 50, unit: 'uF' },
+        voltage: { value: 400, unit: 'V' },
+        seriesResistance: { value: 0.05, unit: 'ohm' },
+      },
+      coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100 },
+      blank: { diameter: mm(23), layers: [{ material: copper, thickness: mm(1.75) }] },
+      gap: mm(0.5),
+      filaments: { blankRadial: 500 },
+    });
+    expectProblem(res, 400, '/body/filaments/blankRadial');
+  });
+});
+
+describe('GET /api/v1/stacks', () => {
+  it('lists the five demo coins of Estmark, marked invented, with mass and mean density', async () => {
+    const res = await request(app).get('/api/v1/stacks');
+    expect(res.status).toBe(200);
+    expect(res.body.items.map((s: { slug: string }) => s.slug)).toEqual([
+      'estmark-1-mark',
+      'estmark-2-marks',
+      'estmark-5-marks',
+      'estmark-10-marks',
+      'estmark-20-marks',
+    ]);
+    for (const s of res.body.items) {
+      expect(s.invented).toBe(true);
+      expect(s.massKg).toBeGreaterThan(1e-3);
+      expect(s.massKg).toBeLessThan(20e-3);
+    }
+    const fiveMarks = res.body.items[2];
+    expect(fiveMarks.densityKgPerM3).toBeCloseTo(8860, 0);
+  });
+});
