@@ -7,6 +7,7 @@ import { fork } from 'node:child_process';
 import path from 'node:path';
 import autocannon from 'autocannon';
 import { projectRoot } from '../backend/paths';
+import { benchPhysics } from './physics';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
 const CONNECTIONS = 10;
@@ -92,3 +93,5 @@ for (const [i, r] of rows.entries()) {
 console.log(
   '\nTargets (quality.md): catalogue search ≥ 0.50 of bare with p99 ≤ 25 ms; calculators p99 ≤ 50 ms.',
 );
+
+benchPhysics();

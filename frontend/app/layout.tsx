@@ -49,6 +49,12 @@ export function Layout() {
             <NavLink to="/match" className={linkClass}>
               Match
             </NavLink>
+            <NavLink to="/layer-lab" className={linkClass}>
+              Layer Lab
+            </NavLink>
+            <NavLink to="/pulse-bench" className={linkClass}>
+              Pulse Bench
+            </NavLink>
             <a
               href="/api/docs/"
               className="rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700"

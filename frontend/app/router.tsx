@@ -49,6 +49,20 @@ export const router = createBrowserRouter([
               Component: (await import('../features/match/routes/match-route')).MatchRoute,
             }),
           },
+          {
+            path: 'layer-lab',
+            lazy: async () => ({
+              Component: (await import('../features/layer-lab/routes/layer-lab-route'))
+                .LayerLabRoute,
+            }),
+          },
+          {
+            path: 'pulse-bench',
+            lazy: async () => ({
+              Component: (await import('../features/pulse-bench/routes/pulse-bench-route'))
+                .PulseBenchRoute,
+            }),
+          },
           { path: '*', element: <RouteError /> },
         ],
       },

@@ -97,10 +97,13 @@ export function ValueTable({ values, units }: { values: PropertyValue[]; units: 
                   {formatEditable(v.referenceTemperatureK - 273.15)} °C
                 </td>
                 <td className="px-3 py-2">
-                  <span className="mr-1.5 text-xs uppercase tracking-wide text-patina-700">
-                    {sourceKindLabels[v.source.kind]}
-                  </span>
-                  {v.source.kind === 'from_memory' ? <FromMemoryBadge /> : null}
+                  {v.source.kind === 'from_memory' ? (
+                    <FromMemoryBadge />
+                  ) : (
+                    <span className="mr-1.5 text-xs uppercase tracking-wide text-patina-700">
+                      {sourceKindLabels[v.source.kind]}
+                    </span>
+                  )}
                   <span className="block">{v.source.citation}</span>
                   {v.source.locator ? (
                     <span className="block text-xs text-ink/60">{v.source.locator}</span>

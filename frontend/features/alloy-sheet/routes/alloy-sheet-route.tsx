@@ -11,6 +11,7 @@ import {
 } from '../../../lib/format';
 import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { useAlloy } from '../api/get-alloy';
+import { SkinDepthSection } from '../components/skin-depth-section';
 import { ValueTable } from '../components/value-table';
 
 function Figure({ label, value }: { label: string; value: string }) {
@@ -77,6 +78,12 @@ export function AlloySheetRoute() {
         </h2>
         <ValueTable values={alloy.values} units={units} />
       </section>
+
+      <SkinDepthSection
+        conductivitySPerM={alloy.conductivitySPerM}
+        relativePermeability={alloy.relativePermeability}
+        magnetic={alloy.magnetic}
+      />
 
       <section aria-labelledby="composition-title" className="flex flex-col gap-2">
         <h2 id="composition-title" className="text-lg font-semibold">

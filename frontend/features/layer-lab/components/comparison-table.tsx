@@ -1,0 +1,94 @@
+import { percentIacs } from '../../../../shared/units/conductivity';
+import { formatHertz, formatMetres, seriesColours } from '../../../lib/chart-format';
+import { formatDensity, formatNumber } from '../../../lib/format';
+import type { UnitPreferences } from '../../../lib/unit-preferences';
+import type { BlankResult } from '../worker/protocol';
+
+/** The figures behind the charts, one column per blank. */
+export function ComparisonTable({
+  results,
+  units,
+  probeHz,
+}: {
+  results: BlankResult[];
+  units: UnitPreferences;
+  probeHz: number;
+}) {
+  const at = (r: BlankResult) => {
+    let best = r.points[0]!;
+    for (const p of r.points)
+      if (
+        Math.abs(Math.log(p.frequencyHz / probeHz)) < Math.abs(Math.log(best.frequencyHz / probeHz))
+      )
+        best = p;
+    return best;
+  };
+  const rows: Array<[string, (r: BlankResult) => string]> = [
+    ['Mass', (r) => `${formatNumber(r.massKg * 1e3)} g`],
+    ['Mean density', (r) => formatDensity(r.densityKgPerM3, units.density)],
+    ['Thickness-weighted σ', (r) => `${formatNumber(percentIacs(r.meanConductivitySPerM))} %IACS`],
+    ['σ/ρ', (r) => `${formatNumber(r.conductivityOverDensity / 1e3)} (MS/m)/(g/cm³)`],
+    [
+      `Apparent σ at ${formatHertz(probeHz)}`,
+      (r) => `${formatNumber(percentIacs(at(r).apparentConductivitySPerM))} %IACS`,
+    ],
+    [`Fit residual at ${formatHertz(probeHz)}`, (r) => formatNumber(at(r).fitResidual, 2)],
+    [
+      'δ = face layer at',
+      (r) => (r.faceDepthFrequencyHz === null ? '— (solid)' : formatHertz(r.faceDepthFrequencyHz)),
+    ],
+    [
+      'Launch height',
+      (r) => (r.launchHeightM === null ? 'not computed' : formatMetres(r.launchHeightM)),
+    ],
+  ];
+  return (
+    <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+      <table className="w-full min-w-[36rem] text-sm">
+        <caption className="sr-only">Figures of the compared blanks</caption>
+        <thead className="bg-patina-50">
+          <tr>
+            <th scope="col" className="px-3 py-2 text-left">
+              Figure
+            </th>
+            {results.map((r, i) => (
+              <th
+                key={r.id}
+                scope="col"
+                className="px-3 py-2 text-right"
+                style={{ color: seriesColours[i] }}
+              >
+                {r.name}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map(([label, value]) => (
+            <tr key={label} className="border-t border-patina-50">
+              <th scope="row" className="px-3 py-1.5 text-left font-medium">
+                {label}
+              </th>
+              {results.map((r) => (
+                <td key={r.id} className="px-3 py-1.5 text-right tabular-nums">
+                  {value(r)}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {results.some((r) => r.launchWarning) ? (
+        <ul className="border-t border-patina-50 px-3 py-2 text-xs text-copper-700">
+          {results
+            .filter((r) => r.launchWarning)
+            .map((r) => (
+              <li key={r.id}>
+                {r.name}: {r.launchWarning}
+              </li>
+            ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}
