@@ -1,33 +1,17 @@
-import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, shot, startProduct, type RunningProduct } from '../helpers/product';
+import { browserSession, shot } from '../helpers/product';
 
-let product: RunningProduct;
-let browser: Browser;
-let page: Page;
-const pageErrors: string[] = [];
-
-beforeAll(async () => {
-  browser = await launchChromium();
-  product = await startProduct();
-  page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
-  page.on('pageerror', (e) => pageErrors.push(e.message));
-}, 180_000);
-
-afterAll(async () => {
-  await browser?.close();
-  await product?.stop();
-});
+const session = browserSession({ beforeAll, afterAll }, { width: 1400, height: 1000 });
 
 describe('the estimators, as a person uses them in Chromium', () => {
   it('Layer Lab compares a plated and a solid demo coin and draws two different curves', async () => {
-    await page.goto(`${product.url}/layer-lab`);
-    await page.getByRole('heading', { name: 'Layer Lab' }).waitFor();
-    await page.getByRole('group', { name: 'Estmark 1 mark' }).waitFor();
-    await page.getByRole('group', { name: 'Estmark 5 marks' }).waitFor();
-    await page.getByRole('button', { name: 'Compare the blanks' }).click();
-    await page.getByText(/computed in \d+ ms/).waitFor({ timeout: 60_000 });
-    const chart = page
+    await session.page.goto(`${session.url}/layer-lab`);
+    await session.page.getByRole('heading', { name: 'Layer Lab' }).waitFor();
+    await session.page.getByRole('group', { name: 'Estmark 1 mark' }).waitFor();
+    await session.page.getByRole('group', { name: 'Estmark 5 marks' }).waitFor();
+    await session.page.getByRole('button', { name: 'Compare the blanks' }).click();
+    await session.page.getByText(/computed in \d+ ms/).waitFor({ timeout: 60_000 });
+    const chart = session.page
       .getByRole('figure')
       .filter({ hasText: 'Apparent conductivity against frequency' });
     const paths = chart.locator('.recharts-line path.recharts-curve');
@@ -35,39 +19,39 @@ describe('the estimators, as a person uses them in Chromium', () => {
     const [a, b] = await paths.evaluateAll((els) => els.map((e) => e.getAttribute('d') ?? ''));
     expect(a!.length).toBeGreaterThan(100);
     expect(a).not.toBe(b);
-    await page.getByRole('row', { name: /Launch height/ }).waitFor();
-    expect(new URL(page.url()).searchParams.get('s')).toBeTruthy();
-    await page.screenshot({ path: shot('e2e-layer-lab'), fullPage: true });
+    await session.page.getByRole('row', { name: /Launch height/ }).waitFor();
+    expect(new URL(session.page.url()).searchParams.get('s')).toBeTruthy();
+    await session.page.screenshot({ path: shot('e2e-layer-lab'), fullPage: true });
   });
 
   it('Pulse Bench runs a launch, shows the result and a caution that comes back', async () => {
-    await page.goto(`${product.url}/pulse-bench`);
-    const caution = page.getByRole('note', { name: 'Caution' });
+    await session.page.goto(`${session.url}/pulse-bench`);
+    const caution = session.page.getByRole('note', { name: 'Caution' });
     await expect(caution.textContent()).resolves.toMatch(/capacitor bank can kill/);
-    await page.getByRole('button', { name: 'Fire (simulated)' }).click();
-    await page
+    await session.page.getByRole('button', { name: 'Fire (simulated)' }).click();
+    await session.page
       .getByRole('region', { name: 'Launch of Estmark 5 marks' })
       .waitFor({ timeout: 60_000 });
-    await expect(page.getByText('Peak current').first().isVisible()).resolves.toBe(true);
-    await page.getByRole('region', { name: 'Collection bins' }).waitFor();
-    await page.screenshot({ path: shot('e2e-pulse-bench'), fullPage: true });
-    await page.getByRole('button', { name: 'Fold away for this visit' }).click();
+    await expect(session.page.getByText('Peak current').first().isVisible()).resolves.toBe(true);
+    await session.page.getByRole('region', { name: 'Collection bins' }).waitFor();
+    await session.page.screenshot({ path: shot('e2e-pulse-bench'), fullPage: true });
+    await session.page.getByRole('button', { name: 'Fold away for this visit' }).click();
     await expect(caution.textContent()).resolves.toMatch(/can kill/);
-    await page.reload();
-    await page.getByRole('button', { name: 'Fold away for this visit' }).waitFor();
+    await session.page.reload();
+    await session.page.getByRole('button', { name: 'Fold away for this visit' }).waitFor();
   });
 
   it('the Alloy sheet gives skin depths at common test frequencies', async () => {
-    await page.goto(`${product.url}/alloys/copper-c11000`);
-    await page.getByRole('heading', { name: 'Skin depth' }).waitFor();
+    await session.page.goto(`${session.url}/alloys/copper-c11000`);
+    await session.page.getByRole('heading', { name: 'Skin depth' }).waitFor();
     // δ of 101 %IACS copper at 1 MHz: 1/√(π·1e6·µ0·58.58e6) = 65.8 µm (physics.md: 66.1 µm at 100 %IACS)
-    await expect(page.getByRole('row', { name: /^1 MHz/ }).textContent()).resolves.toMatch(
+    await expect(session.page.getByRole('row', { name: /^1 MHz/ }).textContent()).resolves.toMatch(
       /65\.8 µm/,
     );
-    await page.screenshot({ path: shot('e2e-alloy-sheet-skin-depth'), fullPage: true });
+    await session.page.screenshot({ path: shot('e2e-alloy-sheet-skin-depth'), fullPage: true });
   });
 
   it('raised no error in the page', () => {
-    expect(pageErrors).toEqual([]);
+    expect(session.pageErrors).toEqual([]);
   });
 });

@@ -91,3 +91,46 @@ export async function launchChromium(): Promise<Browser> {
 export const screenshotDir = path.join(projectRoot, 'test-results');
 fs.mkdirSync(screenshotDir, { recursive: true });
 export const shot = (name: string) => path.join(screenshotDir, `${name}.png`);
+
+export interface BrowserSession {
+  readonly url: string;
+  readonly page: import('playwright-core').Page;
+  /** Uncaught errors the page raised so far. */
+  readonly pageErrors: string[];
+}
+
+/**
+ * Registers beforeAll/afterAll hooks that start the product with `npm start` and open one
+ * Chromium page on it; the returned object is usable inside the tests.
+ */
+export function browserSession(
+  hooks: {
+    beforeAll: typeof import('vitest').beforeAll;
+    afterAll: typeof import('vitest').afterAll;
+  },
+  viewport = { width: 1280, height: 900 },
+): BrowserSession {
+  let product: RunningProduct | undefined;
+  let browser: Browser | undefined;
+  let page: import('playwright-core').Page | undefined;
+  const pageErrors: string[] = [];
+  hooks.beforeAll(async () => {
+    browser = await launchChromium();
+    product = await startProduct();
+    page = await browser.newPage({ viewport });
+    page.on('pageerror', (e) => pageErrors.push(e.message));
+  }, 180_000);
+  hooks.afterAll(async () => {
+    await browser?.close();
+    await product?.stop();
+  });
+  return {
+    get url() {
+      return product!.url;
+    },
+    get page() {
+      return page!;
+    },
+    pageErrors,
+  };
+}
