@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import * as OpenApiValidator from 'express-openapi-validator';
 import helmet from 'helmet';
@@ -7,6 +8,24 @@ import type { Knex } from 'knex';
 import { pinoHttp } from 'pino-http';
 import swaggerUi from 'swagger-ui-express';
 import { loadApiDocument } from './api-document';
+import { authenticate } from './auth/authenticate';
+import { enforceRoles } from './auth/enforce-roles';
+import { createAccountRepositories } from './db/account-repositories';
+import { countUsage } from './http/count-usage';
+import {
+  apiRateLimit,
+  credentialThrottles,
+  DEFAULT_RATE_LIMITS,
+  type RateLimits,
+} from './http/rate-limits';
+import type { Mailer } from './mail/mailer';
+import { createOutboxRepository } from './mail/outbox-repository';
+import { adminRouter } from './routes/admin';
+import { authRouter } from './routes/auth';
+import { keysRouter } from './routes/keys';
+import { meRouter } from './routes/me';
+import { createAccountService } from './services/accounts';
+import { createKeyService } from './services/keys';
 import { createAlloyRepository } from './db/alloy-repository';
 import { createReadingRepository } from './db/reading-repository';
 import { createStackRepository } from './db/stack-repository';
@@ -22,6 +41,15 @@ import { CatalogueStore } from './services/catalogue-store';
 
 export interface AppOptions {
   knex: Knex;
+  mailer: Mailer;
+  /** HS256 signing secret for session tokens (≥ 32 bytes). */
+  jwtSecret: Buffer;
+  /** Base URL of the links in mails. */
+  publicUrl: () => string;
+  production?: boolean;
+  rateLimits?: Partial<RateLimits>;
+  /** Sign-in and reset attempts per 15 minutes: per address, per account. */
+  credentialLimits?: { perAddress: number; perAccount: number };
   logLevel?: string;
   /** Serve the built front end from dist/client when it exists (off for API-only tests). */
   serveClient?: boolean;
@@ -35,6 +63,19 @@ export function createApp(options: AppOptions): Express {
   const { knex } = options;
   const apiDocument = loadApiDocument();
   const catalogue = new CatalogueStore(createAlloyRepository(knex));
+  const repos = createAccountRepositories(knex);
+  const outbox = createOutboxRepository(knex);
+  const production = options.production ?? false;
+  const access = {
+    repos,
+    secret: options.jwtSecret,
+    mailer: options.mailer,
+    publicUrl: options.publicUrl,
+    production,
+  };
+  const accounts = createAccountService(access);
+  const keys = createKeyService(access);
+  const credentials = options.credentialLimits ?? { perAddress: 30, perAccount: 10 };
   const app = express();
 
   app.disable('x-powered-by');
@@ -59,11 +100,24 @@ export function createApp(options: AppOptions): Express {
     res.json(loadApiDocument());
   });
 
+  app.use(cookieParser());
+  // Who is calling, how often, and whether openapi.yaml's x-roles let them: before validation,
+  // so a caller without access learns nothing of the request rules.
+  app.use(
+    '/api/v1',
+    authenticate(repos, options.jwtSecret, production),
+    apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }),
+    countUsage(repos),
+    enforceRoles(apiDocument),
+  );
+
   app.use(
     OpenApiValidator.middleware({
       apiSpec: apiDocument as never,
       validateRequests: { allowUnknownQueryParameters: false },
       validateResponses: true,
+      // Access is decided by enforceRoles from x-roles; the document's security block is for readers.
+      validateSecurity: false,
       ignorePaths: /^\/(?!api\/v1\/)/,
     }),
   );
@@ -75,6 +129,16 @@ export function createApp(options: AppOptions): Express {
   v1.use(readingsRouter(createReadingRepository(knex)));
   v1.use(stacksRouter(createStackRepository(knex), catalogue));
   v1.use(estimatesRouter(catalogue));
+  v1.use(
+    authRouter(
+      accounts,
+      credentialThrottles(credentials.perAddress, credentials.perAccount),
+      production,
+    ),
+  );
+  v1.use(meRouter(repos));
+  v1.use(keysRouter(keys, repos));
+  v1.use(adminRouter(repos, keys, outbox));
   app.use('/api/v1', v1);
   app.use('/api', apiNotFound);
 

@@ -7,6 +7,9 @@ export interface Config {
   databaseFile: string;
   logLevel: string;
   production: boolean;
+  smtpUrl: string | undefined;
+  publicUrl: string | undefined;
+  demoAccounts: boolean;
 }
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -20,5 +23,8 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     databaseFile: env.DATABASE_FILE ?? path.join('data', 'conductory.sqlite'),
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     production: env.NODE_ENV === 'production',
+    smtpUrl: env.SMTP_URL || undefined,
+    publicUrl: env.PUBLIC_URL || undefined,
+    demoAccounts: env.NODE_ENV !== 'production' || env.DEMO_ACCOUNTS === '1',
   };
 }

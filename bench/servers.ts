@@ -8,7 +8,10 @@ import os from 'node:os';
 import path from 'node:path';
 import express from 'express';
 import type { AddressInfo } from 'node:net';
+import crypto from 'node:crypto';
 import { createApp } from '../backend/app';
+import { createMailer } from '../backend/mail/mailer';
+import { createOutboxRepository } from '../backend/mail/outbox-repository';
 import { createKnex } from '../backend/db/knex';
 import { prepareDatabase } from '../backend/db/prepare';
 
@@ -17,10 +20,16 @@ const knex = createKnex(path.join(dir, 'bench.sqlite'));
 await prepareDatabase(knex, { demo: true });
 // Logged as `npm start` logs (info, one line per request); the parent sends this process's
 // stdout to /dev/null so the lines cost what they cost in production, without flooding the report.
+// Rate limits are lifted: the benchmark measures the service, not the limiter's 429s.
+const unlimited = { visitor: 1e9, reader: 1e9, integrator: 1e9, curator: 1e9, admin: 1e9 };
 const product = createApp({
   knex,
+  mailer: await createMailer(createOutboxRepository(knex)),
+  jwtSecret: crypto.randomBytes(32),
+  publicUrl: () => 'http://127.0.0.1',
   serveClient: false,
   logLevel: process.env.LOG_LEVEL ?? 'info',
+  rateLimits: unlimited,
 }).listen(0, '127.0.0.1');
 
 const bare = express();

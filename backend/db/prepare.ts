@@ -1,10 +1,12 @@
 import type { Knex } from 'knex';
 import { PRAGMAS } from './knex';
-import { demoSeeds, referenceSeeds } from './seed-source';
+import { demoAccountSeeds, demoSeeds, referenceSeeds } from './seed-source';
 
 export interface PrepareOptions {
   /** Load the invented demo scenario as well as the reference table. */
   demo: boolean;
+  /** Load the demo accounts (one per role, known passwords). */
+  demoAccounts?: boolean;
 }
 
 /**
@@ -21,6 +23,10 @@ export async function prepareDatabase(knex: Knex, options: PrepareOptions): Prom
   if (options.demo) {
     const [{ stacks }] = (await knex('stacks').count({ stacks: '*' })) as [{ stacks: number }];
     if (Number(stacks) === 0) for (const seed of demoSeeds) await seed(knex);
+  }
+  if (options.demoAccounts) {
+    const [{ users }] = (await knex('users').count({ users: '*' })) as [{ users: number }];
+    if (Number(users) === 0) for (const seed of demoAccountSeeds) await seed(knex);
   }
 }
 
