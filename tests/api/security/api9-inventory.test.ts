@@ -1,8 +1,8 @@
 import type { Express } from 'express';
 import type { Knex } from 'knex';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { loadApiDocument } from '../../backend/api-document';
-import { createTestApp } from '../helpers/test-app';
+import { loadApiDocument } from '../../../backend/api-document';
+import { createTestApp } from '../../helpers/test-app';
 
 let app: Express;
 let knex: Knex;
@@ -42,6 +42,19 @@ describe('API inventory (OWASP API9): openapi.yaml and the mounted routes agree'
     for (const route of mounted) {
       if (NOT_OPERATIONS.includes(route)) continue;
       expect(documented, route).toContain(route);
+    }
+  });
+});
+
+describe('every operation states who may call it (x-roles)', () => {
+  it('has x-roles on every operation, with known roles only', () => {
+    const known = ['visitor', 'reader', 'integrator', 'curator', 'admin'];
+    for (const [path, ops] of Object.entries(loadApiDocument().paths)) {
+      for (const [method, op] of Object.entries(ops)) {
+        const roles = (op as { 'x-roles'?: string[] })['x-roles'];
+        expect(roles, `${method} ${path}`).toBeDefined();
+        for (const r of roles!) expect(known).toContain(r);
+      }
     }
   });
 });
