@@ -1,19 +1,8 @@
 import bcrypt from 'bcryptjs';
-import { commonPasswords } from './common-passwords';
+export { passwordProblem } from '../../shared/schemas/password';
 
 /** bcrypt work factor: ≥ 10 per quality.md; 11 costs about 150 ms here. */
 export const BCRYPT_COST = 11;
-
-/** Why a password is refused, or null. Length 8–64 and ≤ 72 bytes (bcrypt ignores the rest). */
-export function passwordProblem(password: string): string | null {
-  if (password.length < 8) return 'use at least 8 characters';
-  if (password.length > 64) return 'use at most 64 characters';
-  if (new TextEncoder().encode(password).length > 72)
-    return 'use at most 72 bytes (fewer accented or non-Latin characters)';
-  if (commonPasswords.has(password.toLowerCase()))
-    return 'this password is among the most common ones: choose another';
-  return null;
-}
 
 /**
  * bcrypt blocks its thread for ~150 ms per hash; at most two run at once so that a burst of

@@ -1,4 +1,5 @@
-import { NavLink, Outlet, useNavigation } from 'react-router-dom';
+import { NavLink, Outlet, useNavigate, useNavigation } from 'react-router-dom';
+import { useMe, useSignOut } from '../lib/session';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `rounded px-3 py-1.5 text-sm font-medium ${isActive ? 'bg-paper text-patina-900' : 'text-patina-50 hover:bg-patina-700'}`;
@@ -23,6 +24,40 @@ function Mark() {
         strokeLinecap="round"
       />
     </svg>
+  );
+}
+
+/** Who is signed in, with their pages; or the way in. */
+function AccountArea() {
+  const me = useMe();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+  if (!me.data) {
+    return (
+      <NavLink to="/sign-in" className={linkClass}>
+        Sign in
+      </NavLink>
+    );
+  }
+  return (
+    <div className="flex flex-wrap items-center gap-1">
+      <NavLink to="/access" className={linkClass}>
+        Access
+      </NavLink>
+      {me.data.role === 'admin' ? (
+        <NavLink to="/admin" className={linkClass}>
+          Administration
+        </NavLink>
+      ) : null}
+      <button
+        type="button"
+        className="rounded px-3 py-1.5 text-sm text-patina-50 hover:bg-patina-700"
+        title={`${me.data.email} (${me.data.role})`}
+        onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/') })}
+      >
+        Sign out {me.data.name.split(' ')[0]}
+      </button>
+    </div>
   );
 }
 
@@ -62,6 +97,7 @@ export function Layout() {
               API reference
             </a>
           </nav>
+          <AccountArea />
         </div>
         <div
           role="progressbar"

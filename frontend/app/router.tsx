@@ -1,4 +1,4 @@
-import { createBrowserRouter } from 'react-router-dom';
+import { createBrowserRouter, Navigate } from 'react-router-dom';
 import { alloyListQueryOptions } from '../features/catalogue/api/list-alloys';
 import { apiQueryFromFilters, filtersFromSearch } from '../features/catalogue/filters';
 import { CatalogueRoute } from '../features/catalogue/routes/catalogue-route';
@@ -62,6 +62,69 @@ export const router = createBrowserRouter([
               Component: (await import('../features/pulse-bench/routes/pulse-bench-route'))
                 .PulseBenchRoute,
             }),
+          },
+          {
+            path: 'sign-in',
+            lazy: async () => ({
+              Component: (await import('../features/access/routes/sign-in-route')).SignInRoute,
+            }),
+          },
+          {
+            path: 'sign-up',
+            lazy: async () => ({
+              Component: (await import('../features/access/routes/sign-up-route')).SignUpRoute,
+            }),
+          },
+          {
+            path: 'verify',
+            lazy: async () => ({
+              Component: (await import('../features/access/routes/verify-route')).VerifyRoute,
+            }),
+          },
+          {
+            path: 'reset',
+            lazy: async () => ({
+              Component: (await import('../features/access/routes/reset-route')).ResetRoute,
+            }),
+          },
+          {
+            path: 'access',
+            lazy: async () => ({
+              Component: (await import('../features/access/routes/access-route')).AccessRoute,
+            }),
+          },
+          {
+            path: 'admin',
+            lazy: async () => ({
+              Component: (await import('../features/admin/routes/admin-route')).AdminRoute,
+            }),
+            children: [
+              { index: true, element: <Navigate to="/admin/users" replace /> },
+              {
+                path: 'users',
+                lazy: async () => ({
+                  Component: (await import('../features/admin/routes/admin-pages')).UsersPage,
+                }),
+              },
+              {
+                path: 'keys',
+                lazy: async () => ({
+                  Component: (await import('../features/admin/routes/admin-pages')).KeysPage,
+                }),
+              },
+              {
+                path: 'audit',
+                lazy: async () => ({
+                  Component: (await import('../features/admin/routes/admin-pages')).AuditPage,
+                }),
+              },
+              {
+                path: 'outbox',
+                lazy: async () => ({
+                  Component: (await import('../features/admin/routes/admin-pages')).OutboxPage,
+                }),
+              },
+            ],
           },
           { path: '*', element: <RouteError /> },
         ],

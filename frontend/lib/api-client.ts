@@ -11,6 +11,9 @@ export class ApiProblem extends Error {
   }
 }
 
+/** The one place a 401 is noticed: listeners (the session query) learn the person is signed out. */
+export const unauthorized = new EventTarget();
+
 async function send<T>(path: string, init?: RequestInit): Promise<T> {
   let response: Response;
   try {
@@ -29,6 +32,8 @@ async function send<T>(path: string, init?: RequestInit): Promise<T> {
   const body = response.headers.get('content-type')?.includes('json')
     ? await response.json()
     : null;
+  if (response.status === 401 && !path.startsWith('/api/v1/auth/'))
+    unauthorized.dispatchEvent(new Event('401'));
   if (!response.ok) {
     throw new ApiProblem(
       (body as Problem | null) ?? {
@@ -50,5 +55,18 @@ export function apiPost<T>(path: string, body: unknown): Promise<T> {
     method: 'POST',
     body: JSON.stringify(body),
     headers: { 'Content-Type': 'application/json' },
+  });
+}
+
+export function apiSend<T>(
+  method: 'PUT' | 'PATCH' | 'DELETE',
+  path: string,
+  body?: unknown,
+): Promise<T> {
+  return send<T>(path, {
+    method,
+    ...(body === undefined
+      ? {}
+      : { body: JSON.stringify(body), headers: { 'Content-Type': 'application/json' } }),
   });
 }

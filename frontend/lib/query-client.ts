@@ -1,5 +1,5 @@
 import { QueryClient } from '@tanstack/react-query';
-import { ApiProblem } from './api-client';
+import { ApiProblem, unauthorized } from './api-client';
 
 /** One client for the app; a 4xx is an answer, not a hiccup, so it is never retried. */
 export const queryClient = new QueryClient({
@@ -11,3 +11,6 @@ export const queryClient = new QueryClient({
     },
   },
 });
+
+// A 401 anywhere means the session has ended: show the person as signed out.
+unauthorized.addEventListener('401', () => queryClient.setQueryData(['me'], null));
