@@ -32,6 +32,9 @@ import { createStackRepository } from './db/stack-repository';
 import { apiNotFound, problemHandler } from './http/problem';
 import { clientDist } from './paths';
 import { alloysRouter } from './routes/alloys';
+import { curationRouter } from './routes/curation';
+import { createCurationService } from './services/curation';
+import { createReleaseService } from './services/releases';
 import { estimatesRouter } from './routes/estimates';
 import { healthRouter } from './routes/health';
 import { matchRouter } from './routes/match';
@@ -118,13 +121,36 @@ export function createApp(options: AppOptions): Express {
       validateResponses: true,
       // Access is decided by enforceRoles from x-roles; the document's security block is for readers.
       validateSecurity: false,
-      ignorePaths: /^\/(?!api\/v1\/)/,
+      // The upload is checked by multer (with limits) and the import service instead.
+      ignorePaths: /^\/(?!api\/v1\/)|^\/api\/v1\/imports\/?$/,
     }),
   );
 
   const v1 = express.Router();
   v1.use(healthRouter(catalogue, apiDocument.info.version));
-  v1.use(alloysRouter(catalogue));
+  const alloyRepository = createAlloyRepository(knex);
+  const releases = createReleaseService(knex, alloyRepository);
+  const curation = createCurationService(knex, repos, options.mailer, catalogue);
+  // Before the alloys router: /alloys/export and /alloys/{slug}/history must win over /alloys/{slug}.
+  v1.use(curationRouter(curation, catalogue, releases));
+  v1.use(
+    alloysRouter(catalogue, releases, async (slug) => {
+      const rows = await knex('measurements as m')
+        .join('alloys as a', 'a.id', 'm.alloy_id')
+        .join('sources as s', 's.id', 'm.source_id')
+        .where('a.slug', slug)
+        .select('m.*', 's.citation', 's.kind');
+      return rows.map((m) => ({
+        conductivitySPerM: m.conductivity_s_per_m,
+        frequencyHz: m.frequency_hz,
+        temperatureK: m.temperature_k,
+        uncertaintyPercent: m.uncertainty_percent,
+        sample: m.sample,
+        instrument: m.instrument,
+        source: { id: m.source_id, citation: m.citation, kind: m.kind },
+      }));
+    }),
+  );
   v1.use(matchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
   v1.use(stacksRouter(createStackRepository(knex), catalogue));

@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import * as createReferenceTable from '../../migrations/20261201120000_create_reference_table';
 import * as createStacksAndReadings from '../../migrations/20261201120100_create_stacks_and_readings';
 import * as createAccounts from '../../migrations/20261201130000_create_accounts';
+import * as createCuration from '../../migrations/20261201140000_create_curation';
 
 /**
  * Migrations listed statically: Knex's directory loading cannot import .ts files under vitest,
@@ -12,6 +13,7 @@ export const migrations: Record<string, Knex.Migration> = {
   '20261201120000_create_reference_table': createReferenceTable,
   '20261201120100_create_stacks_and_readings': createStacksAndReadings,
   '20261201130000_create_accounts': createAccounts,
+  '20261201140000_create_curation': createCuration,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -3,6 +3,17 @@ import type { AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { ProblemError } from '../http/problem';
 import type { CatalogueQuery, CatalogueItem } from '../services/catalogue';
 import type { CatalogueStore } from '../services/catalogue-store';
+import type { ReleaseService } from '../services/releases';
+
+export interface Measurement {
+  conductivitySPerM: number;
+  frequencyHz: number;
+  temperatureK: number;
+  uncertaintyPercent: number;
+  sample: string;
+  instrument: string;
+  source: { id: number; citation: string; kind: string };
+}
 
 /** Query values arrive as strings (already checked against openapi.yaml); turn them into types. */
 function parseQuery(req: Request): CatalogueQuery {
@@ -38,20 +49,28 @@ function detail(record: AlloyRecord, item: CatalogueItem) {
   };
 }
 
-export function alloysRouter(catalogue: CatalogueStore): Router {
+export function alloysRouter(
+  catalogue: CatalogueStore,
+  releases: ReleaseService,
+  measurementsOf: (slug: string) => Promise<Measurement[]>,
+): Router {
   const router = Router();
+  /** The live table, or the one a release froze (`?release=2026.12.0`). */
+  const tableFor = (req: Request) =>
+    typeof req.query.release === 'string' ? releases.catalogue(req.query.release) : catalogue.get();
 
   router.get('/alloys', async (req, res) => {
-    const table = await catalogue.get();
+    const table = await tableFor(req);
     res.json(table.search(parseQuery(req)));
   });
 
   router.get('/alloys/:slug', async (req, res) => {
-    const table = await catalogue.get();
+    const table = await tableFor(req);
     const slug = String(req.params.slug);
     const found = table.find(slug);
     if (!found) throw new ProblemError(404, 'Not found', `No alloy '${slug}' in the table`);
-    res.json(detail(found.record, found.item));
+    const measured = typeof req.query.release === 'string' ? [] : await measurementsOf(slug);
+    res.json({ ...detail(found.record, found.item), measurements: measured });
   });
 
   return router;

@@ -487,6 +487,183 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/alloys/export": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** The published table as CSV (RFC 4180, formula-like text defused) or JSON */
+        get: operations["exportAlloys"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/alloys/{slug}/history": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Every applied change to an alloy, who proposed and approved it, and why */
+        get: operations["getAlloyHistory"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/revisions": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Proposed changes, newest first */
+        get: operations["listRevisions"];
+        put?: never;
+        /** Propose a change to the table, with a source and a reason */
+        post: operations["proposeRevision"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/revisions/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One revision with the values it would replace */
+        get: operations["getRevision"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/revisions/{id}/review": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /** Approve (applied at once, with its history) or reject; never one's own */
+        post: operations["reviewRevision"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/imports": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Upload alloys or a measurement set (CSV or JSON); a dry run unless apply=true
+         * @description Every row is checked; a file with any bad row is refused whole (422, each problem with its
+         *     row and field) and changes nothing. With apply=true a clean file becomes one pending
+         *     revision, reviewed as a unit. Limits: 2 MiB, one file, 5000 rows.
+         */
+        post: operations["importFile"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/imports/template": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A CSV template for an import */
+        get: operations["getImportTemplate"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/releases": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Published table releases, newest first */
+        get: operations["listReleases"];
+        put?: never;
+        /** Publish the current table as an immutable, checksummed release */
+        post: operations["publishRelease"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/releases/{version}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One release with its snapshot, checksum and changelog */
+        get: operations["getRelease"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/releases/{version}/diff": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** What changed from another release to this one */
+        get: operations["diffReleases"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -590,6 +767,16 @@ export interface components {
             condition: string | null;
             notes: string | null;
             values: components["schemas"]["PropertyValue"][];
+            /** @description Measured conductivities from imported measurement sets, beside the handbook values. */
+            measurements?: {
+                conductivitySPerM: number;
+                frequencyHz: number;
+                temperatureK: number;
+                uncertaintyPercent: number;
+                sample: string;
+                instrument: string;
+                source: Record<string, never>;
+            }[];
         };
         MatchRequest: {
             conductivity: components["schemas"]["ConductivityQuantity"];
@@ -835,6 +1022,58 @@ export interface components {
                 thickness: components["schemas"]["LengthQuantity"];
             }[];
         };
+        ValueSet: {
+            nominal: number;
+            min?: number | null;
+            max?: number | null;
+        };
+        /** @description Fields and values to set; values in SI (S/m, kg/m3, 1/K, 1). */
+        RevisionSet: {
+            name?: string;
+            family?: components["schemas"]["Family"];
+            uns?: string | null;
+            magnetic?: boolean;
+            relativePermeability?: number;
+            condition?: string | null;
+            notes?: string | null;
+            values?: {
+                conductivity?: components["schemas"]["ValueSet"];
+                density?: components["schemas"]["ValueSet"];
+                resistivity_temperature_coefficient?: components["schemas"]["ValueSet"];
+                relative_permeability?: components["schemas"]["ValueSet"];
+            };
+        };
+        SourceInput: {
+            citation: string;
+            /** @enum {string} */
+            kind: "handbook" | "standard" | "paper" | "measurement_set";
+            locator?: string | null;
+        };
+        Revision: {
+            id: number;
+            /** @enum {string} */
+            kind: "create" | "edit" | "retire" | "import";
+            alloy: string | null;
+            set: Record<string, never>;
+            before: Record<string, never> | null;
+            source: Record<string, never>;
+            reason: string;
+            /** @enum {string} */
+            status: "pending" | "approved" | "rejected";
+            author: string;
+            reviewer: string | null;
+            reviewComment: string | null;
+            createdAt: string;
+            reviewedAt: string | null;
+        };
+        Release: {
+            version: string;
+            createdAt: string;
+            /** @description SHA-256 of the canonical JSON of `alloys` */
+            checksum: string;
+            changelog: Record<string, never>[];
+            alloys: Record<string, never>[];
+        };
     };
     responses: {
         /** @description An RFC 9457 problem. */
@@ -906,6 +1145,8 @@ export interface components {
         };
     };
     parameters: {
+        /** @description Read the table as this release froze it (e.g. 2026.12.0). */
+        Release: string;
         Id: number;
     };
     requestBodies: never;
@@ -938,6 +1179,8 @@ export interface operations {
     listAlloys: {
         parameters: {
             query?: {
+                /** @description Read the table as this release froze it (e.g. 2026.12.0). */
+                release?: components["parameters"]["Release"];
                 /** @description Fuzzy search over name, UNS number, family and elements. */
                 q?: string;
                 family?: components["schemas"]["Family"][];
@@ -975,7 +1218,10 @@ export interface operations {
     };
     getAlloy: {
         parameters: {
-            query?: never;
+            query?: {
+                /** @description Read the table as this release froze it (e.g. 2026.12.0). */
+                release?: components["parameters"]["Release"];
+            };
             header?: never;
             path: {
                 slug: string;
@@ -1610,6 +1856,344 @@ export interface operations {
                             text: string;
                             template: string;
                         }[];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    exportAlloys: {
+        parameters: {
+            query?: {
+                format?: "csv" | "json";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description A file to download (Content-Disposition names it). */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                    "application/json": {
+                        items: Record<string, never>[];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getAlloyHistory: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                slug: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Newest first. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: {
+                            revisionId: number;
+                            at: string;
+                            field: string;
+                            oldValue: unknown;
+                            newValue: unknown;
+                            proposedBy: string;
+                            approvedBy: string;
+                            reason: string;
+                            source: Record<string, never>;
+                        }[];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    listRevisions: {
+        parameters: {
+            query?: {
+                status?: "pending" | "approved" | "rejected";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Revisions. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: components["schemas"]["Revision"][];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    proposeRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    kind: "create" | "edit" | "retire";
+                    alloy: string;
+                    set: components["schemas"]["RevisionSet"];
+                    source: components["schemas"]["SourceInput"];
+                    reason: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The pending revision. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Revision"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The revision. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Revision"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    reviewRevision: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @enum {string} */
+                    decision: "approve" | "reject";
+                    comment: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The reviewed revision. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Revision"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    importFile: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file: string;
+                    /** @enum {string} */
+                    apply?: "true" | "false";
+                    citation?: string;
+                    /** @enum {string} */
+                    sourceKind?: "handbook" | "standard" | "paper" | "measurement_set";
+                    locator?: string;
+                    reason?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Dry run: the rows and what would change. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            /** @description The import as a pending revision. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getImportTemplate: {
+        parameters: {
+            query?: {
+                kind?: "alloys" | "measurements";
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The template. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    listReleases: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Releases. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: {
+                            version: string;
+                            createdAt: string;
+                            checksum: string;
+                            changes: number;
+                        }[];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    publishRelease: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The release. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Release"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getRelease: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                version: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The release. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Release"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    diffReleases: {
+        parameters: {
+            query: {
+                against: string;
+            };
+            header?: never;
+            path: {
+                version: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Added, removed and changed alloys. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        from: string;
+                        to: string;
+                        added: string[];
+                        removed: string[];
+                        changed: Record<string, never>[];
                     };
                 };
             };
