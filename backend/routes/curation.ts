@@ -78,17 +78,21 @@ export function curationRouter(
 
   router.get('/alloys/export', async (req, res) => {
     const table = await catalogue.get();
+    // The CSV has the columns of an alloy import, so an export can be edited and imported back.
     const rows = table.all().map((a) => {
       const item = table.find(a.slug)!.item;
+      const conductivity = a.values.find((v) => v.quantity === 'conductivity');
+      const iacs = (s: number | null | undefined) =>
+        s == null ? '' : Number((s / 0.58e6).toPrecision(12));
       return {
         slug: a.slug,
         name: a.name,
-        uns: a.uns ?? '',
         family: a.family,
-        magnetic: a.magnetic,
-        conductivity_s_per_m: item.conductivitySPerM,
-        conductivity_percent_iacs: Number(item.conductivityPercentIacs.toFixed(3)),
-        density_kg_per_m3: item.densityKgPerM3,
+        uns: a.uns ?? '',
+        conductivity_iacs: iacs(conductivity?.nominal),
+        conductivity_min_iacs: iacs(conductivity?.min),
+        conductivity_max_iacs: iacs(conductivity?.max),
+        density_g_cm3: Number((item.densityKgPerM3 / 1000).toPrecision(12)),
         notes: a.notes ?? '',
       };
     });
@@ -99,7 +103,7 @@ export function curationRouter(
     }
     const csv = stringify(
       rows.map((r) => Object.fromEntries(Object.entries(r).map(([k, v]) => [k, defuse(v)]))),
-      { header: true, record_delimiter: '\r\n', cast: { boolean: (b) => (b ? 'true' : 'false') } },
+      { header: true, record_delimiter: '\r\n' },
     );
     res
       .type('text/csv')
@@ -180,15 +184,13 @@ export function curationRouter(
         },
         req.ip,
       );
-      res
-        .status(201)
-        .json({
-          dryRun: false,
-          kind: preview.kind,
-          rows: preview.rows,
-          changes: preview.changes,
-          revision,
-        });
+      res.status(201).json({
+        dryRun: false,
+        kind: preview.kind,
+        rows: preview.rows,
+        changes: preview.changes,
+        revision,
+      });
     },
   );
 

@@ -59,6 +59,9 @@ const FIELD_COLUMNS: Record<string, string> = {
 };
 const ROOM_K = 293.15;
 const now = () => new Date().toISOString();
+/** Equal to 1e-9, so a value that went out to %IACS text and back counts as unchanged. */
+const same = (a: number | null, b: number | null) =>
+  a === null || b === null ? a === b : Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
 const invalid = (path: string, message: string) =>
   new ProblemError(422, 'Unprocessable content', `${path}: ${message}`, [{ path, message }]);
 
@@ -179,7 +182,19 @@ export function createCurationService(
     }
     for (const [quantity, v] of Object.entries(set.values ?? {}) as Array<[Quantity, ValueSet]>) {
       const row = await trx('property_values').where({ alloy_id: alloy.id, quantity }).first();
-      const next = { nominal: v.nominal, min: v.min ?? null, max: v.max ?? null };
+      // A bound left out keeps its value; only an explicit null clears it.
+      const next = {
+        nominal: v.nominal,
+        min: v.min === undefined ? (row?.min ?? null) : v.min,
+        max: v.max === undefined ? (row?.max ?? null) : v.max,
+      };
+      if (
+        row &&
+        same(row.nominal, next.nominal) &&
+        same(row.min, next.min) &&
+        same(row.max, next.max)
+      )
+        continue;
       if (row) {
         await trx('property_values')
           .where({ id: row.id })
