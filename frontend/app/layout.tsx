@@ -41,6 +41,11 @@ function AccountArea() {
   }
   return (
     <div className="flex flex-wrap items-center gap-1">
+      {me.data.role === 'curator' || me.data.role === 'admin' ? (
+        <NavLink to="/review" className={linkClass}>
+          Review Desk
+        </NavLink>
+      ) : null}
       <NavLink to="/access" className={linkClass}>
         Access
       </NavLink>

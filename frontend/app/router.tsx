@@ -88,6 +88,13 @@ export const router = createBrowserRouter([
             }),
           },
           {
+            path: 'review',
+            lazy: async () => ({
+              Component: (await import('../features/review-desk/routes/review-desk-route'))
+                .ReviewDeskRoute,
+            }),
+          },
+          {
             path: 'access',
             lazy: async () => ({
               Component: (await import('../features/access/routes/access-route')).AccessRoute,

@@ -11,7 +11,10 @@ import {
 } from '../../../lib/format';
 import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { useAlloy } from '../api/get-alloy';
+import { HistorySection } from '../components/history-section';
+import { ProposeChange } from '../components/propose-change';
 import { SkinDepthSection } from '../components/skin-depth-section';
+import { useMe } from '../../../lib/session';
 import { ValueTable } from '../components/value-table';
 
 function Figure({ label, value }: { label: string; value: string }) {
@@ -27,6 +30,7 @@ export function AlloySheetRoute() {
   const { slug = '' } = useParams();
   const { data: alloy } = useAlloy(slug);
   const [units] = useUnitPreferences();
+  const me = useMe();
   return (
     <article aria-labelledby="alloy-title" className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb" className="text-sm">
@@ -79,6 +83,60 @@ export function AlloySheetRoute() {
         <ValueTable values={alloy.values} units={units} />
       </section>
 
+      {alloy.measurements?.length ? (
+        <section aria-labelledby="measured-title" className="flex flex-col gap-2">
+          <h2 id="measured-title" className="text-lg font-semibold">
+            Measured beside the handbook
+          </h2>
+          <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+            <table className="w-full min-w-[40rem] text-sm">
+              <caption className="sr-only">
+                Measured conductivities from imported measurement sets
+              </caption>
+              <thead className="bg-patina-50 text-left">
+                <tr>
+                  {[
+                    'Measured',
+                    'Handbook',
+                    'At',
+                    'Uncertainty',
+                    'Sample',
+                    'Instrument',
+                    'Source',
+                  ].map((h) => (
+                    <th key={h} scope="col" className="px-3 py-2">
+                      {h}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {(alloy.measurements ?? []).map((m, i) => (
+                  <tr key={i} className="border-t border-patina-50">
+                    <td className="px-3 py-1.5 tabular-nums">
+                      {formatConductivity(m.conductivitySPerM, units.conductivity)}
+                    </td>
+                    <td className="px-3 py-1.5 tabular-nums">
+                      {formatConductivity(alloy.conductivitySPerM, units.conductivity)}
+                    </td>
+                    <td className="px-3 py-1.5">
+                      {formatNumber(m.frequencyHz / 1e3)} kHz,{' '}
+                      {formatEditable(m.temperatureK - 273.15)} °C
+                    </td>
+                    <td className="px-3 py-1.5">{formatEditable(m.uncertaintyPercent)} %</td>
+                    <td className="px-3 py-1.5">{m.sample}</td>
+                    <td className="px-3 py-1.5">{m.instrument}</td>
+                    <td className="px-3 py-1.5 text-xs">
+                      {String((m.source as { citation?: string }).citation ?? '')}
+                    </td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </section>
+      ) : null}
+
       <SkinDepthSection
         conductivitySPerM={alloy.conductivitySPerM}
         relativePermeability={alloy.relativePermeability}
@@ -104,6 +162,10 @@ export function AlloySheetRoute() {
           Mass per cent; the balance and trace elements as the standard for the alloy allows.
         </p>
       </section>
+      <HistorySection slug={alloy.slug} />
+      {me.data && (me.data.role === 'curator' || me.data.role === 'admin') ? (
+        <ProposeChange alloy={alloy} />
+      ) : null}
       <NominalCaution />
     </article>
   );
