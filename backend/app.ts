@@ -132,7 +132,7 @@ export function createApp(options: AppOptions): Express {
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
   // Before the alloys router: /alloys/export and /alloys/{slug}/history must win over /alloys/{slug}.
-  v1.use(curationRouter(curation, catalogue, releases));
+  v1.use(curationRouter(curation, catalogue, releases, (entry) => repos.audit.record(entry)));
   v1.use(
     alloysRouter(catalogue, releases, async (slug) => {
       const rows = await knex('measurements as m')

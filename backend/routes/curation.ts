@@ -47,6 +47,13 @@ export function curationRouter(
   curation: CurationService,
   catalogue: CatalogueStore,
   releases: ReleaseService,
+  audit: (entry: {
+    actorUserId: number;
+    action: string;
+    target: string;
+    detail?: unknown;
+    address?: string;
+  }) => Promise<unknown>,
 ): Router {
   const router = Router();
 
@@ -195,7 +202,15 @@ export function curationRouter(
   );
 
   router.post('/releases', async (req, res) => {
-    res.status(201).json(await releases.publish(userOf(req)));
+    const release = await releases.publish(userOf(req));
+    await audit({
+      actorUserId: userOf(req),
+      action: 'release.published',
+      target: `release:${release.version}`,
+      detail: { checksum: release.checksum },
+      address: req.ip,
+    });
+    res.status(201).json(release);
   });
   router.get('/releases', async (_req, res) => {
     res.json({ items: await releases.list() });

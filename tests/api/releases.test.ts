@@ -28,6 +28,17 @@ describe('releases', () => {
     expect(recomputed).toBe(fetched.checksum);
   });
 
+  it('is in the audit log', async () => {
+    const admin = await signedIn(t.app, 'admin');
+    const audit = (await admin.get('/api/v1/audit')).body.items;
+    expect(
+      audit.some(
+        (a: { action: string; target: string }) =>
+          a.action === 'release.published' && a.target === `release:${first}`,
+      ),
+    ).toBe(true);
+  });
+
   it('a reader may not publish (403)', async () => {
     expect((await (await signedIn(t.app, 'reader')).post('/api/v1/releases')).status).toBe(403);
   });
