@@ -94,4 +94,5 @@ console.log(
   '\nTargets (quality.md): catalogue search ≥ 0.50 of bare with p99 ≤ 25 ms; calculators p99 ≤ 50 ms.',
 );
 
-benchPhysics();
+// BENCH_PHYSICS=0 skips the engine's comparison with SciPy (about a minute).
+if (process.env.BENCH_PHYSICS !== '0') benchPhysics();

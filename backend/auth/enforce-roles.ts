@@ -33,9 +33,17 @@ export function roleRules(doc: ApiDocument): RouteRule[] {
  */
 export function enforceRoles(doc: ApiDocument): RequestHandler {
   const rules = roleRules(doc);
+  // Paths repeat (the same few searches and calculators): remember each one's rule.
+  const seen = new Map<string, RouteRule | null>();
   return (req, _res, next) => {
     const path = req.originalUrl.split('?')[0]!;
-    const rule = rules.find((r) => r.method === req.method && r.pattern.test(path));
+    const key = `${req.method} ${path}`;
+    let rule = seen.get(key);
+    if (rule === undefined) {
+      rule = rules.find((r) => r.method === req.method && r.pattern.test(path)) ?? null;
+      if (seen.size > 10_000) seen.clear();
+      seen.set(key, rule);
+    }
     if (!rule) return next();
     const p = req.principal;
     if (rule.roles.includes(p.role)) return next();
