@@ -4,18 +4,20 @@ import { stringify } from 'csv-stringify/sync';
 import { ProblemError } from '../http/problem';
 import type { CatalogueStore } from '../services/catalogue-store';
 import type { CurationService } from '../services/curation';
-import { importTemplate, previewImport } from '../services/imports';
+import { parsingStorage, type ParsedFile } from '../services/import-storage';
+import { importTemplate, previewRecords } from '../services/imports';
 import type { ReleaseService } from '../services/releases';
 
-/** Upload limits (quality.md: multer's defaults are unlimited). Memory storage: no temp files. */
+/** Upload limits (quality.md: multer's defaults are unlimited): CSV streams, so it may be 20 MiB. */
 export const UPLOAD_LIMITS = {
-  fileSize: 2 * 1024 * 1024,
+  fileSize: 20 * 1024 * 1024,
   files: 1,
   fields: 10,
   parts: 12,
   fieldSize: 10_000,
 };
-const upload = multer({ storage: multer.memoryStorage(), limits: UPLOAD_LIMITS });
+// The storage engine parses the file as it streams in and stores nothing: no temporary files.
+const upload = multer({ storage: parsingStorage, limits: UPLOAD_LIMITS });
 
 const userOf = (req: Request) => (req.principal as { userId: number }).userId;
 
@@ -146,7 +148,9 @@ export function curationRouter(
       const extra = Object.keys(fields).filter((k) => !allowed.includes(k));
       if (extra.length)
         throw new ProblemError(400, 'Bad request', `Unknown fields: ${extra.join(', ')}`);
-      const preview = previewImport(req.file.buffer, await catalogue.get());
+      const parsed = (req.file as ParsedFile).upload;
+      if (!parsed) throw new ProblemError(400, 'Bad request', 'The upload could not be read.');
+      const preview = previewRecords(parsed.records, await catalogue.get());
       if (preview.errors.length) {
         throw new ProblemError(
           422,

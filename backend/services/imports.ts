@@ -146,7 +146,14 @@ const num = (v: unknown) =>
  * is written here: applying is a separate step, reviewed like any other change.
  */
 export function previewImport(buffer: Buffer, catalogue: Catalogue): ImportPreview {
-  const rows = records(textOf(buffer));
+  return previewRecords(records(textOf(buffer)), catalogue);
+}
+
+/** The same checks on records already parsed (the streaming upload path). */
+export function previewRecords(
+  rows: Array<Record<string, unknown>>,
+  catalogue: Catalogue,
+): ImportPreview {
   if (rows.length === 0) throw new ProblemError(400, 'Bad request', 'The file has no rows.');
   if (rows.length > MAX_IMPORT_ROWS)
     throw new ProblemError(

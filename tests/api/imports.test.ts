@@ -107,14 +107,34 @@ describe('bad uploads: 4xx with reasons, nothing imported, no temporary files', 
     expectRefused(await upload(body as string), status as number);
     expect(await countRevisions()).toBe(before);
   });
-  it('oversized (over 2 MiB) → 413', async () => {
-    expectRefused(await upload(`${HEADER}\r\n${'x'.repeat(2.1 * 1024 * 1024)}`), 413);
+  it('oversized (over 20 MiB) → 413', async () => {
+    // 4000 rows of 5.3 kB: under the row cap and the record size, over the byte limit.
+    const row = `big,${'y'.repeat(5300)},,,,,,,\r\n`;
+    expectRefused(await upload(`${HEADER}\r\n${row.repeat(4000)}`), 413);
+  });
+  it('JSON over 2 MiB → 413 (JSON cannot stream; CSV can)', async () => {
+    expectRefused(
+      await upload(`[${'{"slug":"x"},'.repeat(200_000)}{"slug":"x"}]`, 'big.json'),
+      413,
+    );
+  });
+  it('a record too long to be a row → 400', async () => {
+    expectRefused(await upload(`${HEADER}\r\n${'x'.repeat(20_000)}`), 400);
   });
   it('too many rows (over 5000) → 413', async () => {
     const rows = Array.from({ length: 5001 }, (_, i) => `row-${i},R ${i},copper,,50,,,8.9,`).join(
       '\r\n',
     );
     expectRefused(await upload(`${HEADER}\r\n${rows}\r\n`), 413);
+  });
+  it('streams a large clean CSV (5000 rows, about 0.4 MB) through the row checks', async () => {
+    const rows = Array.from(
+      { length: 5000 },
+      (_, i) => `bulk-${i},Bulk ${i},copper,,50,49,51,8.9,`,
+    ).join('\r\n');
+    const res = await upload(`${HEADER}\r\n${rows}\r\n`);
+    expect(res.status).toBe(200);
+    expect(res.body.rows).toBe(5000);
   });
   it('a string in place of the file → 400', async () => {
     expectRefused(
