@@ -65,7 +65,8 @@ export const JSON_BODY_LIMIT = '64kb';
 export function createApp(options: AppOptions): Express {
   const { knex } = options;
   const apiDocument = loadApiDocument();
-  const catalogue = new CatalogueStore(createAlloyRepository(knex));
+  const alloyRepository = createAlloyRepository(knex);
+  const catalogue = new CatalogueStore(alloyRepository);
   const repos = createAccountRepositories(knex);
   const outbox = createOutboxRepository(knex);
   const production = options.production ?? false;
@@ -128,7 +129,6 @@ export function createApp(options: AppOptions): Express {
 
   const v1 = express.Router();
   v1.use(healthRouter(catalogue, apiDocument.info.version));
-  const alloyRepository = createAlloyRepository(knex);
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
   // Before the alloys router: /alloys/export and /alloys/{slug}/history must win over /alloys/{slug}.

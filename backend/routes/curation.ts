@@ -1,6 +1,7 @@
 import { Router, type ErrorRequestHandler, type Request, type Response } from 'express';
 import multer from 'multer';
 import { stringify } from 'csv-stringify/sync';
+import { percentIacs } from '../../shared/units/conductivity';
 import { ProblemError } from '../http/problem';
 import type { CatalogueStore } from '../services/catalogue-store';
 import type { CurationService } from '../services/curation';
@@ -92,7 +93,7 @@ export function curationRouter(
       const item = table.find(a.slug)!.item;
       const conductivity = a.values.find((v) => v.quantity === 'conductivity');
       const iacs = (s: number | null | undefined) =>
-        s == null ? '' : Number((s / 0.58e6).toPrecision(12));
+        s == null ? '' : Number(percentIacs(s).toPrecision(12));
       return {
         slug: a.slug,
         name: a.name,

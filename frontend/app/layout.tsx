@@ -60,7 +60,7 @@ function AccountArea() {
         title={`${me.data.email} (${me.data.role})`}
         onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/') })}
       >
-        Sign out {me.data.name.split(' ')[0]}
+        Sign out <span className="sr-only">{me.data.email}</span>
       </button>
     </div>
   );

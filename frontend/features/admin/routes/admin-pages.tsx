@@ -1,68 +1,60 @@
+import { DataTable } from '../../../components/data-table';
 import { ProblemMessage } from '../../../components/problem-message';
 import { useAdminMutations, useAllKeys, useAudit, useOutbox, useUsers } from '../api/admin';
 
 const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : '—');
-const th = 'px-3 py-2 text-left';
 const td = 'px-3 py-1.5 align-top';
 
 export function UsersPage() {
   const users = useUsers();
   const { updateUser } = useAdminMutations();
   return (
-    <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+    <>
       {users.isError ? <ProblemMessage error={users.error} /> : null}
       {updateUser.isError ? <ProblemMessage error={updateUser.error} /> : null}
-      <table className="w-full min-w-[40rem] text-sm">
-        <caption className="sr-only">People with an account</caption>
-        <thead className="bg-patina-50">
-          <tr>
-            {['Name', 'E-mail', 'Role', 'Confirmed', 'State', ''].map((h) => (
-              <th key={h} scope="col" className={th}>
-                {h}
-              </th>
-            ))}
+      <DataTable
+        caption="People with an account"
+        headers={['Name', 'E-mail', 'Role', 'Confirmed', 'State', '']}
+        minWidth="40rem"
+      >
+        {users.data?.items.map((u) => (
+          <tr key={u.id} className="border-t border-patina-50">
+            <td className={td}>{u.name}</td>
+            <td className={td}>{u.email}</td>
+            <td className={td}>
+              <select
+                aria-label={`Role of ${u.email}`}
+                className="rounded border border-patina-300 px-1 py-0.5"
+                value={u.role}
+                onChange={(e) =>
+                  updateUser.mutate({ id: u.id, role: e.target.value as typeof u.role })
+                }
+              >
+                {['reader', 'integrator', 'curator', 'admin'].map((r) => (
+                  <option key={r}>{r}</option>
+                ))}
+              </select>
+            </td>
+            <td className={td}>{u.emailVerified ? 'yes' : 'no'}</td>
+            <td className={td}>{u.status}</td>
+            <td className={td}>
+              <button
+                type="button"
+                className="underline"
+                onClick={() =>
+                  updateUser.mutate({
+                    id: u.id,
+                    status: u.status === 'active' ? 'disabled' : 'active',
+                  })
+                }
+              >
+                {u.status === 'active' ? 'Disable' : 'Enable'}
+              </button>
+            </td>
           </tr>
-        </thead>
-        <tbody>
-          {users.data?.items.map((u) => (
-            <tr key={u.id} className="border-t border-patina-50">
-              <td className={td}>{u.name}</td>
-              <td className={td}>{u.email}</td>
-              <td className={td}>
-                <select
-                  aria-label={`Role of ${u.email}`}
-                  className="rounded border border-patina-300 px-1 py-0.5"
-                  value={u.role}
-                  onChange={(e) =>
-                    updateUser.mutate({ id: u.id, role: e.target.value as typeof u.role })
-                  }
-                >
-                  {['reader', 'integrator', 'curator', 'admin'].map((r) => (
-                    <option key={r}>{r}</option>
-                  ))}
-                </select>
-              </td>
-              <td className={td}>{u.emailVerified ? 'yes' : 'no'}</td>
-              <td className={td}>{u.status}</td>
-              <td className={td}>
-                <button
-                  type="button"
-                  className="underline"
-                  onClick={() =>
-                    updateUser.mutate({
-                      id: u.id,
-                      status: u.status === 'active' ? 'disabled' : 'active',
-                    })
-                  }
-                >
-                  {u.status === 'active' ? 'Disable' : 'Enable'}
-                </button>
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+        ))}
+      </DataTable>
+    </>
   );
 }
 
@@ -70,80 +62,64 @@ export function KeysPage() {
   const keys = useAllKeys();
   const { revokeKey } = useAdminMutations();
   return (
-    <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+    <>
       {keys.isError ? <ProblemMessage error={keys.error} /> : null}
-      <table className="w-full min-w-[44rem] text-sm">
-        <caption className="sr-only">Every API key</caption>
-        <thead className="bg-patina-50">
-          <tr>
-            {['Owner', 'Name', 'Prefix', 'Role', 'Last used', 'Expires', 'Revoked', ''].map((h) => (
-              <th key={h} scope="col" className={th}>
-                {h}
-              </th>
-            ))}
+      <DataTable
+        caption="Every API key"
+        headers={['Owner', 'Name', 'Prefix', 'Role', 'Last used', 'Expires', 'Revoked', '']}
+        minWidth="44rem"
+      >
+        {keys.data?.items.map((k) => (
+          <tr key={k.id} className="border-t border-patina-50">
+            <td className={td}>#{k.ownerId}</td>
+            <td className={td}>{k.name}</td>
+            <td className={`${td} font-mono text-xs`}>cdy_{k.prefix}_…</td>
+            <td className={td}>{k.role}</td>
+            <td className={td}>{when(k.lastUsedAt)}</td>
+            <td className={td}>{when(k.expiresAt)}</td>
+            <td className={td}>{when(k.revokedAt)}</td>
+            <td className={td}>
+              {k.revokedAt ? null : (
+                <button
+                  type="button"
+                  className="text-copper-700 underline"
+                  onClick={() => revokeKey.mutate(k.id)}
+                >
+                  Revoke
+                </button>
+              )}
+            </td>
           </tr>
-        </thead>
-        <tbody>
-          {keys.data?.items.map((k) => (
-            <tr key={k.id} className="border-t border-patina-50">
-              <td className={td}>#{k.ownerId}</td>
-              <td className={td}>{k.name}</td>
-              <td className={`${td} font-mono text-xs`}>cdy_{k.prefix}_…</td>
-              <td className={td}>{k.role}</td>
-              <td className={td}>{when(k.lastUsedAt)}</td>
-              <td className={td}>{when(k.expiresAt)}</td>
-              <td className={td}>{when(k.revokedAt)}</td>
-              <td className={td}>
-                {k.revokedAt ? null : (
-                  <button
-                    type="button"
-                    className="text-copper-700 underline"
-                    onClick={() => revokeKey.mutate(k.id)}
-                  >
-                    Revoke
-                  </button>
-                )}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+        ))}
+      </DataTable>
+    </>
   );
 }
 
 export function AuditPage() {
   const audit = useAudit();
   return (
-    <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
+    <>
       {audit.isError ? <ProblemMessage error={audit.error} /> : null}
-      <table className="w-full min-w-[44rem] text-sm">
-        <caption className="sr-only">Audit log, newest first</caption>
-        <thead className="bg-patina-50">
-          <tr>
-            {['When', 'Who', 'What', 'On', 'Detail', 'From'].map((h) => (
-              <th key={h} scope="col" className={th}>
-                {h}
-              </th>
-            ))}
+      <DataTable
+        caption="Audit log, newest first"
+        headers={['When', 'Who', 'What', 'On', 'Detail', 'From']}
+        minWidth="44rem"
+      >
+        {audit.data?.items.map((a) => (
+          <tr key={a.id} className="border-t border-patina-50">
+            <td className={td}>{when(a.at)}</td>
+            <td className={td}>{a.actor ?? '—'}</td>
+            <td className={td}>{a.action}</td>
+            <td className={td}>{a.target ?? '—'}</td>
+            <td className={`${td} font-mono text-xs`}>
+              {a.detail ? JSON.stringify(a.detail) : ''}
+            </td>
+            <td className={td}>{a.address ?? ''}</td>
           </tr>
-        </thead>
-        <tbody>
-          {audit.data?.items.map((a) => (
-            <tr key={a.id} className="border-t border-patina-50">
-              <td className={td}>{when(a.at)}</td>
-              <td className={td}>{a.actor ?? '—'}</td>
-              <td className={td}>{a.action}</td>
-              <td className={td}>{a.target ?? '—'}</td>
-              <td className={`${td} font-mono text-xs`}>
-                {a.detail ? JSON.stringify(a.detail) : ''}
-              </td>
-              <td className={td}>{a.address ?? ''}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+        ))}
+      </DataTable>
+    </>
   );
 }
 

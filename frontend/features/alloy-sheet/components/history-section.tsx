@@ -1,3 +1,4 @@
+import { DataTable } from '../../../components/data-table';
 import { useHistory } from '../api/history';
 
 const show = (v: unknown) => {
@@ -21,49 +22,37 @@ export function HistorySection({ slug }: { slug: string }) {
       {items.length === 0 ? (
         <p className="text-sm text-ink/70">No change since the table was seeded.</p>
       ) : (
-        <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-          <table className="w-full min-w-[44rem] text-sm">
-            <caption className="sr-only">Applied changes to this alloy, newest first</caption>
-            <thead className="bg-patina-50 text-left">
-              <tr>
-                {[
-                  'When',
-                  'Field',
-                  'Old → new (SI)',
-                  'Proposed by',
-                  'Approved by',
-                  'Reason and source',
-                ].map((h) => (
-                  <th key={h} scope="col" className="px-3 py-2">
-                    {h}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {items.map((h, i) => (
-                <tr
-                  key={`${h.revisionId}-${h.field}-${i}`}
-                  className="border-t border-patina-50 align-top"
-                >
-                  <td className="px-3 py-1.5 whitespace-nowrap">
-                    {new Date(h.at).toLocaleString()}
-                  </td>
-                  <td className="px-3 py-1.5">{h.field}</td>
-                  <td className="px-3 py-1.5 tabular-nums">
-                    {show(h.oldValue)} → {show(h.newValue)}
-                  </td>
-                  <td className="px-3 py-1.5">{h.proposedBy}</td>
-                  <td className="px-3 py-1.5">{h.approvedBy}</td>
-                  <td className="px-3 py-1.5">
-                    {h.reason}
-                    <span className="block text-xs text-ink/60">{h.source.citation}</span>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          caption="Applied changes to this alloy, newest first"
+          headers={[
+            'When',
+            'Field',
+            'Old → new (SI)',
+            'Proposed by',
+            'Approved by',
+            'Reason and source',
+          ]}
+          minWidth="44rem"
+        >
+          {items.map((h, i) => (
+            <tr
+              key={`${h.revisionId}-${h.field}-${i}`}
+              className="border-t border-patina-50 align-top"
+            >
+              <td className="px-3 py-1.5 whitespace-nowrap">{new Date(h.at).toLocaleString()}</td>
+              <td className="px-3 py-1.5">{h.field}</td>
+              <td className="px-3 py-1.5 tabular-nums">
+                {show(h.oldValue)} → {show(h.newValue)}
+              </td>
+              <td className="px-3 py-1.5">{h.proposedBy}</td>
+              <td className="px-3 py-1.5">{h.approvedBy}</td>
+              <td className="px-3 py-1.5">
+                {h.reason}
+                <span className="block text-xs text-ink/60">{h.source.citation}</span>
+              </td>
+            </tr>
+          ))}
+        </DataTable>
       )}
     </section>
   );

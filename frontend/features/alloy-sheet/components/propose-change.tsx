@@ -1,10 +1,12 @@
+import { IACS_100_S_PER_M } from '../../../../shared/units/conductivity';
 import { useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
 import { ProblemMessage } from '../../../components/problem-message';
 import { apiPost } from '../../../lib/api-client';
 import type { Alloy } from '../../../lib/api-types';
 
-const IACS = 0.58e6;
+/** S/m per %IACS (IEC 60028). */
+const IACS = IACS_100_S_PER_M / 100;
 const field = 'rounded border border-patina-300 px-2 py-1';
 
 /** A curator's proposal for this alloy: new figures with a source and a reason, for a second curator to review. */

@@ -1,3 +1,4 @@
+import { DataTable } from '../../../components/data-table';
 import { Link, useParams } from 'react-router-dom';
 import { FromMemoryBadge, MagneticBadge } from '../../../components/badges';
 import { NominalCaution } from '../../../components/nominal-caution';
@@ -88,52 +89,42 @@ export function AlloySheetRoute() {
           <h2 id="measured-title" className="text-lg font-semibold">
             Measured beside the handbook
           </h2>
-          <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-            <table className="w-full min-w-[40rem] text-sm">
-              <caption className="sr-only">
+          <DataTable
+            caption="
                 Measured conductivities from imported measurement sets
-              </caption>
-              <thead className="bg-patina-50 text-left">
-                <tr>
-                  {[
-                    'Measured',
-                    'Handbook',
-                    'At',
-                    'Uncertainty',
-                    'Sample',
-                    'Instrument',
-                    'Source',
-                  ].map((h) => (
-                    <th key={h} scope="col" className="px-3 py-2">
-                      {h}
-                    </th>
-                  ))}
-                </tr>
-              </thead>
-              <tbody>
-                {(alloy.measurements ?? []).map((m, i) => (
-                  <tr key={i} className="border-t border-patina-50">
-                    <td className="px-3 py-1.5 tabular-nums">
-                      {formatConductivity(m.conductivitySPerM, units.conductivity)}
-                    </td>
-                    <td className="px-3 py-1.5 tabular-nums">
-                      {formatConductivity(alloy.conductivitySPerM, units.conductivity)}
-                    </td>
-                    <td className="px-3 py-1.5">
-                      {formatNumber(m.frequencyHz / 1e3)} kHz,{' '}
-                      {formatEditable(m.temperatureK - 273.15)} °C
-                    </td>
-                    <td className="px-3 py-1.5">{formatEditable(m.uncertaintyPercent)} %</td>
-                    <td className="px-3 py-1.5">{m.sample}</td>
-                    <td className="px-3 py-1.5">{m.instrument}</td>
-                    <td className="px-3 py-1.5 text-xs">
-                      {String((m.source as { citation?: string }).citation ?? '')}
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+              "
+            headers={[
+              'Measured',
+              'Handbook',
+              'At',
+              'Uncertainty',
+              'Sample',
+              'Instrument',
+              'Source',
+            ]}
+            minWidth="40rem"
+          >
+            {(alloy.measurements ?? []).map((m, i) => (
+              <tr key={i} className="border-t border-patina-50">
+                <td className="px-3 py-1.5 tabular-nums">
+                  {formatConductivity(m.conductivitySPerM, units.conductivity)}
+                </td>
+                <td className="px-3 py-1.5 tabular-nums">
+                  {formatConductivity(alloy.conductivitySPerM, units.conductivity)}
+                </td>
+                <td className="px-3 py-1.5">
+                  {formatNumber(m.frequencyHz / 1e3)} kHz, {formatEditable(m.temperatureK - 273.15)}{' '}
+                  °C
+                </td>
+                <td className="px-3 py-1.5">{formatEditable(m.uncertaintyPercent)} %</td>
+                <td className="px-3 py-1.5">{m.sample}</td>
+                <td className="px-3 py-1.5">{m.instrument}</td>
+                <td className="px-3 py-1.5 text-xs">
+                  {String((m.source as { citation?: string }).citation ?? '')}
+                </td>
+              </tr>
+            ))}
+          </DataTable>
         </section>
       ) : null}
 

@@ -1,3 +1,4 @@
+import { percentIacs } from '../../../../shared/units/conductivity';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { inputClass, QuantityInput } from '../../../components/quantity-input';
@@ -61,7 +62,7 @@ export function MatchForm({ readings, pending, onSubmit }: Props) {
     if (!r) return;
     reset({
       ...matchFormDefaults,
-      conductivityValue: formatEditable(r.conductivitySPerM / 0.58e6, 4),
+      conductivityValue: formatEditable(percentIacs(r.conductivitySPerM), 4),
       conductivityUnit: '%IACS',
       temperatureValue: formatEditable(r.temperatureK - 273.15, 4),
       temperatureUnit: 'C',

@@ -1,9 +1,10 @@
+import { IACS_100_S_PER_M } from '../../../../shared/units/conductivity';
 import { useState } from 'react';
 import type { Revision } from '../api/review';
 
 /** Values in the trade's units for reading: %IACS for conductivity, g/cm³ for density. */
 const scales: Record<string, [number, string]> = {
-  conductivity: [0.58e6, ' %IACS'],
+  conductivity: [IACS_100_S_PER_M / 100, ' %IACS'],
   density: [1000, ' g/cm³'],
 };
 
