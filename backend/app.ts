@@ -5,7 +5,7 @@ import express, { type Express } from 'express';
 import * as OpenApiValidator from 'express-openapi-validator';
 import helmet from 'helmet';
 import type { Knex } from 'knex';
-import { pinoHttp } from 'pino-http';
+import type { DestinationStream } from 'pino';
 import swaggerUi from 'swagger-ui-express';
 import { loadApiDocument } from './api-document';
 import { authenticate } from './auth/authenticate';
@@ -13,9 +13,19 @@ import { enforceRoles } from './auth/enforce-roles';
 import { createAccountRepositories } from './db/account-repositories';
 import { countUsage } from './http/count-usage';
 import {
+  estimateRateLimit,
+  DEFAULT_ESTIMATE_LIMITS,
+  type EstimateLimits,
+} from './http/estimate-rate-limit';
+import { requestLog } from './http/request-log';
+import { resolveOperation } from './http/resolve-operation';
+import { createEstimatePool, type EstimatePool } from './estimates/pool';
+import {
   apiRateLimit,
   credentialThrottles,
+  DEFAULT_CREDENTIAL_LIMITS,
   DEFAULT_RATE_LIMITS,
+  type CredentialLimits,
   type RateLimits,
 } from './http/rate-limits';
 import type { Mailer } from './mail/mailer';
@@ -30,6 +40,7 @@ import { createAlloyRepository } from './db/alloy-repository';
 import { createReadingRepository } from './db/reading-repository';
 import { createStackRepository } from './db/stack-repository';
 import { apiNotFound, problemHandler } from './http/problem';
+import { refuseNonFinite } from './http/refuse-non-finite';
 import { clientDist } from './paths';
 import { alloysRouter } from './routes/alloys';
 import { curationRouter } from './routes/curation';
@@ -51,9 +62,20 @@ export interface AppOptions {
   publicUrl: () => string;
   production?: boolean;
   rateLimits?: Partial<RateLimits>;
-  /** Sign-in and reset attempts per 15 minutes: per address, per account. */
-  credentialLimits?: { perAddress: number; perAccount: number };
+  /** Sign-in and reset attempts per 15 minutes (see CredentialLimits). */
+  credentialLimits?: CredentialLimits;
+  /**
+   * PUBLIC_URL as configured (not the address derived after listening): when set, the only origin
+   * a cookie-authenticated write may come from; unset, the request's own scheme, host and port.
+   */
+  publicOrigin?: string;
   logLevel?: string;
+  /** Where the request log goes (standard output unless a test captures it). */
+  logStream?: DestinationStream;
+  /** The calculators' worker pool; one is made (and started on first use) when not given. */
+  estimatePool?: EstimatePool;
+  /** Calculations per minute by caller, on top of rateLimits. */
+  estimateLimits?: Partial<EstimateLimits>;
   /** Serve the built front end from dist/client when it exists (off for API-only tests). */
   serveClient?: boolean;
 }
@@ -79,10 +101,13 @@ export function createApp(options: AppOptions): Express {
   };
   const accounts = createAccountService(access);
   const keys = createKeyService(access);
-  const credentials = options.credentialLimits ?? { perAddress: 30, perAccount: 10 };
+  const credentials = options.credentialLimits ?? DEFAULT_CREDENTIAL_LIMITS;
   const app = express();
 
   app.disable('x-powered-by');
+  // /api/v1/Users and /api/v1/users/ are not /api/v1/users (and routers say the same below).
+  app.set('case sensitive routing', true);
+  app.set('strict routing', true);
   // Array query parameters (?family=a&family=b) need the extended parser (validator docs).
   app.set('query parser', 'extended');
   app.use(
@@ -91,8 +116,12 @@ export function createApp(options: AppOptions): Express {
       contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
     }),
   );
-  app.use(pinoHttp({ level: options.logLevel ?? 'silent' }));
+  app.use(requestLog(options.logLevel ?? 'silent', options.logStream));
+  // Before any handler: a request under /api/v1 is one operation of openapi.yaml, or a 404/405.
+  app.use(resolveOperation(apiDocument));
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT }));
+  // Infinity, NaN and 1e999 never reach the validator's coercion or a handler (400, field named).
+  app.use('/api', refuseNonFinite);
 
   // Swagger UI goes before the validator, which would otherwise refuse its undocumented paths.
   app.use(
@@ -109,10 +138,11 @@ export function createApp(options: AppOptions): Express {
   // so a caller without access learns nothing of the request rules.
   app.use(
     '/api/v1',
-    authenticate(repos, options.jwtSecret, production),
+    authenticate(repos, options.jwtSecret, production, options.publicOrigin),
     apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }),
     countUsage(repos),
-    enforceRoles(apiDocument),
+    enforceRoles(),
+    estimateRateLimit({ ...DEFAULT_ESTIMATE_LIMITS, ...options.estimateLimits }),
   );
 
   app.use(
@@ -127,7 +157,7 @@ export function createApp(options: AppOptions): Express {
     }),
   );
 
-  const v1 = express.Router();
+  const v1 = express.Router({ caseSensitive: true, strict: true });
   v1.use(healthRouter(catalogue, apiDocument.info.version));
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
@@ -154,14 +184,8 @@ export function createApp(options: AppOptions): Express {
   v1.use(matchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
   v1.use(stacksRouter(createStackRepository(knex), catalogue));
-  v1.use(estimatesRouter(catalogue));
-  v1.use(
-    authRouter(
-      accounts,
-      credentialThrottles(credentials.perAddress, credentials.perAccount),
-      production,
-    ),
-  );
+  v1.use(estimatesRouter(catalogue, options.estimatePool ?? createEstimatePool()));
+  v1.use(authRouter(accounts, credentialThrottles(credentials), production));
   v1.use(meRouter(repos));
   v1.use(keysRouter(keys, repos));
   v1.use(adminRouter(repos, keys, outbox));

@@ -1,37 +1,71 @@
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { loadJwtSecret } from './auth/session-tokens';
-import { readConfig } from './config';
+import { readConfig, type Config } from './config';
 import { createAccountRepositories } from './db/account-repositories';
 import { createKnex } from './db/knex';
 import { prepareDatabase } from './db/prepare';
+import { claimServerLock } from './db/server-lock';
+import { createEstimatePool } from './estimates/pool';
 import { createMailer } from './mail/mailer';
 import { createOutboxRepository } from './mail/outbox-repository';
 import { createKeyService } from './services/keys';
 
 const HOUR = 3600_000;
+/** In-flight requests get this long to finish after SIGTERM/SIGINT (quality.md). */
+const DRAIN_MS = 10_000;
 
-/** Starts the service: migrate and seed before listening, drain and close on SIGTERM. */
+function describeMode(config: Config): string {
+  return config.production
+    ? 'Mode: production (NODE_ENV=production): JWT_SECRET required, secure cookies, demo accounts ' +
+        (config.demoAccounts ? 'ON (DEMO_ACCOUNTS=1)' : 'off')
+    : 'Mode: development (set NODE_ENV=production for a deployment): demo accounts on, secret kept beside the database';
+}
+
+/** Starts the service: migrate and seed before listening, drain and close on SIGTERM/SIGINT. */
 export async function startServer(): Promise<Server> {
   const config = readConfig();
+  let releaseLock = () => {};
+  try {
+    releaseLock = claimServerLock(config.databaseFile);
+  } catch (error) {
+    console.error((error as Error).message);
+    process.exit(1);
+  }
   const knex = createKnex(config.databaseFile);
   try {
     await prepareDatabase(knex, { demo: true, demoAccounts: config.demoAccounts });
   } catch (error) {
     console.error(`Database preparation failed for ${config.databaseFile}:`, error);
     await knex.destroy();
+    releaseLock();
     process.exit(1);
   }
-  const jwtSecret = loadJwtSecret(process.env, config.databaseFile, config.production);
+  let jwtSecret: Buffer;
+  try {
+    jwtSecret = loadJwtSecret(process.env, config.databaseFile, config.production);
+  } catch (error) {
+    console.error((error as Error).message);
+    await knex.destroy();
+    releaseLock();
+    process.exit(1);
+  }
   const mailer = await createMailer(createOutboxRepository(knex), config.smtpUrl);
+  const estimatePool = createEstimatePool({
+    threads: config.estimateThreads,
+  });
   let publicUrl = config.publicUrl ?? '';
   const app = createApp({
     knex,
     mailer,
     jwtSecret,
     publicUrl: () => publicUrl,
+    // Cookie writes must come from this origin when PUBLIC_URL says where people reach us
+    // (behind a TLS proxy the request itself looks like plain http).
+    publicOrigin: config.publicUrl,
     production: config.production,
     logLevel: config.logLevel,
+    estimatePool,
   });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
@@ -40,8 +74,9 @@ export async function startServer(): Promise<Server> {
     console.log(
       `Conductory is serving on http://${config.host}:${port}/ (database ${config.databaseFile})`,
     );
+    console.log(describeMode(config));
     if (!config.smtpUrl)
-      console.log('Mail goes to a local fake SMTP server; admins read it in the Outbox.');
+      console.log('Mail goes to a local fake SMTP server and its outbox; SMTP_URL sends for real.');
   });
 
   // Keys about to expire: warn their owners, at start and hourly.
@@ -57,22 +92,48 @@ export async function startServer(): Promise<Server> {
       .sendExpiryNotices()
       .catch((e) => console.error('expiry notices failed', e));
   notices();
-  setInterval(notices, HOUR).unref();
+  const hourly = setInterval(notices, HOUR);
+  hourly.unref();
 
+  let closing = false;
   const shutdown = (signal: string) => {
-    console.log(`${signal}: closing; in-flight requests get up to 10 s`);
-    const force = setTimeout(() => process.exit(1), 10_000);
+    if (closing) return;
+    closing = true;
+    console.log(`${signal}: no new connections; in-flight requests get up to ${DRAIN_MS / 1000} s`);
+    clearInterval(hourly);
+    const force = setTimeout(() => {
+      console.error('Requests still open after the drain time: closing them.');
+      server.closeAllConnections();
+    }, DRAIN_MS);
     force.unref();
     server.close(() => {
-      void mailer
+      clearTimeout(force);
+      void estimatePool
         .close()
+        .then(() => mailer.close())
         .then(() => knex.destroy())
-        .then(() => process.exit(0));
+        .then(() => {
+          releaseLock();
+          console.log('Closed the database; bye.');
+          process.exit(0);
+        })
+        .catch((error) => {
+          console.error('Shutdown failed:', error);
+          releaseLock();
+          process.exit(1);
+        });
     });
     server.closeIdleConnections();
   };
-  process.once('SIGTERM', () => shutdown('SIGTERM'));
-  process.once('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  // `npm start` execs this process, so npm forwards signals to it; should npm itself be killed
+  // outright, this process is re-parented: close down rather than serve on as an orphan.
+  const parent = process.ppid;
+  const orphanWatch = setInterval(() => {
+    if (process.ppid !== parent) shutdown('parent process gone');
+  }, 1000);
+  orphanWatch.unref();
   return server;
 }
 

@@ -8,6 +8,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { projectRoot } from '../backend/paths';
 import { benchPhysics } from './physics';
+import { heaviestLaunch } from '../tests/helpers/launches';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
 const CONNECTIONS = 10;
@@ -60,6 +61,7 @@ const ports = await new Promise<{ product: number; bare: number }>((resolve) =>
 
 const rows: Array<{ name: string; rps: number; p50: number; p99: number; errors: number }> = [];
 for (const c of cases) {
+  process.stdout.write(`  ${c.name}…\n`);
   const result = await autocannon({
     url: `http://127.0.0.1:${ports[c.target]}${c.path}`,
     method: c.method,
@@ -76,6 +78,42 @@ for (const c of cases) {
     errors: result.errors + result.non2xx,
   });
 }
+
+/**
+ * /health while the calculators are saturated: launch requests at the schema's largest filament
+ * counts (each runs into the compute limit) keep every worker thread busy and the queue full,
+ * and autocannon measures how long /health waits meanwhile. On the event loop, three such
+ * launches once kept /health waiting 17 s.
+ */
+async function healthUnderLoad() {
+  const base = `http://127.0.0.1:${ports.product}`;
+  let stop = false;
+  const statuses = new Map<number, number>();
+  const launcher = async () => {
+    while (!stop) {
+      const res = await fetch(`${base}/api/v1/estimates/launch`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(heaviestLaunch),
+      });
+      await res.arrayBuffer();
+      statuses.set(res.status, (statuses.get(res.status) ?? 0) + 1);
+      if (res.status === 503) await new Promise((r) => setTimeout(r, 200));
+    }
+  };
+  const launchers = Array.from({ length: 8 }, launcher);
+  await new Promise((r) => setTimeout(r, 1000));
+  const result = await autocannon({
+    url: `${base}/api/v1/health`,
+    connections: CONNECTIONS,
+    duration: Math.max(DURATION_S, 8),
+  });
+  stop = true;
+  await Promise.all(launchers);
+  return { result, statuses };
+}
+process.stdout.write('  /health while the calculators are saturated…\n');
+const saturated = await healthUnderLoad();
 servers.disconnect();
 
 const bareGet = rows[0]!.rps;
@@ -92,6 +130,14 @@ for (const [i, r] of rows.entries()) {
 }
 console.log(
   '\nTargets (quality.md): catalogue search ≥ 0.50 of bare with p99 ≤ 25 ms; calculators p99 ≤ 50 ms.',
+);
+const h = saturated.result;
+console.log(
+  `\n/health while 8 clients keep the calculators saturated with the heaviest launches:` +
+    `\n  ${h.requests.average.toFixed(0)} req/s, p50 ${h.latency.p50.toFixed(1)} ms, p99 ${h.latency.p99.toFixed(1)} ms, ` +
+    `max ${h.latency.max.toFixed(1)} ms, errors ${h.errors + h.non2xx}` +
+    `\n  launch answers: ${[...saturated.statuses].map(([s, n]) => `${n} × ${s}`).join(', ')}` +
+    `\n  (aim, issue 8: p99 under 50 ms)`,
 );
 
 // BENCH_PHYSICS=0 skips the engine's comparison with SciPy (about a minute).

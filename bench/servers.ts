@@ -30,6 +30,7 @@ const product = createApp({
   serveClient: false,
   logLevel: process.env.LOG_LEVEL ?? 'info',
   rateLimits: unlimited,
+  estimateLimits: unlimited,
 }).listen(0, '127.0.0.1');
 
 const bare = express();

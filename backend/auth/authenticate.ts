@@ -3,6 +3,7 @@ import type { AccountRepositories } from '../db/account-repositories';
 import { ProblemError } from '../http/problem';
 import { hashApiKey, KEY_PREFIX } from './api-keys';
 import { roleRank, type Role } from './roles';
+import { crossSiteWriteRefusal } from './same-origin';
 import { ACCESS_TOKEN_SECONDS, SESSION_COOKIE, signSession, verifySession } from './session-tokens';
 
 /** Re-issue the short-lived cookie once it is this old, so an active person stays signed in. */
@@ -25,13 +26,17 @@ const lower = (a: Role, b: Role): Role => (roleRank(a) <= roleRank(b) ? a : b);
  * Sets req.principal. An `Authorization: Bearer cdy_…` header must carry a live API key (a bad
  * one is a 401 at once: a machine should hear that its key failed). A session cookie must carry
  * a valid JWT of a live session; a bad or stale cookie leaves the caller a visitor, with the
- * reason kept, so that public pages still work and protected ones answer 401. Keys never set a
- * cookie: they cannot sign anyone into the browser.
+ * reason kept, so that public pages still work and protected ones answer 401. A write with a
+ * valid cookie must come from this service's own origin (same-origin.ts): PUBLIC_URL's when it is
+ * configured, else the request's own scheme, host and port. Keys never set a cookie: they cannot
+ * sign anyone into the browser.
  */
 export function authenticate(
   repos: AccountRepositories,
   secret: Buffer,
   production: boolean,
+  /** PUBLIC_URL when configured: then the only origin a cookie write may come from. */
+  publicOrigin?: string,
 ): RequestHandler {
   return async (req, res, next) => {
     const header = req.get('authorization');
@@ -94,14 +99,14 @@ export function authenticate(
       };
       return next();
     }
-    // Cross-site writes: SameSite=Strict already withholds the cookie; refuse a foreign Origin too.
-    if (!['GET', 'HEAD', 'OPTIONS'].includes(req.method)) {
-      const origin = req.get('origin');
-      const site = req.get('sec-fetch-site');
-      if ((origin && new URL(origin).host !== req.get('host')) || site === 'cross-site') {
-        return next(new ProblemError(403, 'Forbidden', 'A write from another site was refused.'));
-      }
-    }
+    // Cross-site writes: SameSite=Strict already withholds the cookie; check the Origin too.
+    const refusal = crossSiteWriteRefusal({
+      method: req.method,
+      origin: req.get('origin'),
+      secFetchSite: req.get('sec-fetch-site'),
+      expected: [publicOrigin ?? `${req.protocol}://${req.get('host') ?? ''}`],
+    });
+    if (refusal) return next(new ProblemError(403, 'Forbidden', refusal));
     req.principal = { kind: 'session', role: user.role, userId: user.id, sessionId: session.id };
     if (Date.now() / 1000 - claims.iat > REFRESH_AFTER_SECONDS) {
       res.cookie(

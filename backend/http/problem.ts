@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isOutsideModelError } from '../../shared/physics/errors';
 
 export interface FieldError {
   /** JSON-pointer-like location of the offending input, e.g. /body/conductivity/unit. */
@@ -13,6 +14,8 @@ export class ProblemError extends Error {
     readonly title: string,
     readonly detail?: string,
     readonly errors?: FieldError[],
+    /** Extra response headers, e.g. Retry-After on a 503. */
+    readonly headers?: Record<string, string>,
   ) {
     super(detail ?? title);
     this.name = 'ProblemError';
@@ -66,9 +69,16 @@ export const problemHandler: ErrorRequestHandler = (error, req, res, _next) => {
   let errors: FieldError[] | undefined;
 
   if (error instanceof ProblemError) {
+    if (error.headers) res.set(error.headers);
     title = error.title;
     detail = error.detail;
     errors = error.errors;
+  } else if (isOutsideModelError(error)) {
+    // An input outside the range where a model holds (shared/physics/errors.ts).
+    status = 422;
+    title = titles[422]!;
+    detail = error.message;
+    errors = [{ path: error.field, message: error.message }];
   } else if (err.type === 'entity.parse.failed') {
     detail = 'The request body is not valid JSON.';
     errors = [{ path: '/body', message: 'malformed JSON' }];

@@ -8,8 +8,9 @@ import { ProblemError } from './problem';
  * temperature below absolute zero, a resistivity of zero).
  */
 export function siFromRequest(kind: QuantityKind, quantity: Quantity, path: string): number {
+  let si: number;
   try {
-    return quantityToSI(kind, quantity);
+    si = quantityToSI(kind, quantity);
   } catch (error) {
     if (error instanceof UnknownUnitError) {
       throw new ProblemError(400, 'Bad request', error.message, [
@@ -23,4 +24,11 @@ export function siFromRequest(kind: QuantityKind, quantity: Quantity, path: stri
     }
     throw error;
   }
+  // A value the schema allows whose SI form a double cannot hold: 5e-324 µF is 0 F, 1e-300
+  // nΩ·m an infinite conductivity. Every calculation after this would divide by it.
+  if (!Number.isFinite(si) || (si === 0 && quantity.value !== 0)) {
+    const message = `${quantity.value} ${quantity.unit} is too ${si === 0 ? 'small' : 'large'} to express in SI units`;
+    throw new ProblemError(400, 'Bad request', message, [{ path: `${path}/value`, message }]);
+  }
+  return si;
 }

@@ -1,4 +1,4 @@
-import type { RequestHandler } from 'express';
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Caller } from '../auth/roles';
 import { ProblemError } from './problem';
@@ -33,29 +33,55 @@ export function apiRateLimit(limits: RateLimits): RequestHandler {
   });
 }
 
+/** Sign-in, sign-up and reset attempts allowed per window (15 minutes unless a test says). */
+export interface CredentialLimits {
+  /** From one address, whatever the account: slows one machine trying many accounts. */
+  perAddress: number;
+  /** For one account from one address: the usual lock-out, which a stranger elsewhere cannot cause. */
+  perAccount: number;
+  /**
+   * For one account from every address together: a ceiling against guessing spread over many
+   * addresses. Ten times perAccount (at least 100) unless given.
+   */
+  perAccountCeiling?: number;
+}
+
+export const DEFAULT_CREDENTIAL_LIMITS: Required<CredentialLimits> = {
+  perAddress: 30,
+  perAccount: 10,
+  perAccountCeiling: 100,
+};
+
 /**
- * Sign-in and password-reset throttles, per address and per account, so that guessing is slow
- * however it is spread. The account key is the e-mail as given, whether or not it exists.
+ * Sign-in and password-reset throttles (quality.md: per account and per address). The account is
+ * the e-mail as given, whether or not it exists. The account limit is keyed on the account and the
+ * address together, so a stranger's failures lock out the stranger and not the owner (a lock-out
+ * per account alone lets anyone deny the owner: OWASP Authentication Cheat Sheet, account
+ * lockout); the ceiling per account alone still caps guessing spread over many addresses. The
+ * numbers are common practice, no source.
  */
 export function credentialThrottles(
-  perAddress: number,
-  perAccount: number,
+  limits: CredentialLimits,
   windowMs = 15 * 60_000,
 ): RequestHandler[] {
-  const common = { windowMs, standardHeaders: 'draft-8' as const, legacyHeaders: false };
+  const ceiling = limits.perAccountCeiling ?? Math.max(100, 10 * limits.perAccount);
+  const common = {
+    windowMs,
+    standardHeaders: 'draft-8' as const,
+    legacyHeaders: false,
+    handler: (_r: Request, res: Response, next: NextFunction) =>
+      next(tooMany(Number(res.getHeader('retry-after') ?? 60))),
+  };
+  const address = (req: Request) => `ip:${ipKeyGenerator(req.ip ?? '')}`;
+  const account = (req: Request) =>
+    `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
   return [
+    rateLimit({ ...common, limit: limits.perAddress, keyGenerator: address }),
     rateLimit({
       ...common,
-      limit: perAddress,
-      keyGenerator: (req) => `ip:${ipKeyGenerator(req.ip ?? '')}`,
-      handler: (_r, res, next) => next(tooMany(Number(res.getHeader('retry-after') ?? 60))),
+      limit: limits.perAccount,
+      keyGenerator: (req) => `${account(req)}|${address(req)}`,
     }),
-    rateLimit({
-      ...common,
-      limit: perAccount,
-      keyGenerator: (req) =>
-        `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`,
-      handler: (_r, res, next) => next(tooMany(Number(res.getHeader('retry-after') ?? 60))),
-    }),
+    rateLimit({ ...common, limit: ceiling, keyGenerator: account }),
   ];
 }

@@ -2,6 +2,7 @@ import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import nodemailer from 'nodemailer';
 import { SMTPServer } from 'smtp-server';
+import { linksIn, maskMail } from './mask';
 import type { OutboxRepository } from './outbox-repository';
 import type { MailContent } from './templates';
 
@@ -14,13 +15,45 @@ export interface Mailer {
 
 const FROM = 'Conductory <no-reply@conductory.invalid>';
 
+/** Receives each message as sent, tokens and all, when the local fake server is the only mailbox. */
+export type LocalDelivery = (to: string, content: MailContent) => void;
+
+export interface MailerOptions {
+  /**
+   * Without SMTP_URL, who reads the mail unmasked. By default the developer who ran the server,
+   * on its console (printLinks), outside production and tests; null for nobody. Never called when
+   * SMTP_URL is set: then the mail reaches its owner for real.
+   */
+  localDelivery?: LocalDelivery | null;
+}
+
+/** Development's mailbox: each link of each message, on the console of the person running it. */
+export const printLinks: LocalDelivery = (to, content) => {
+  for (const link of linksIn(content.text)) console.log(`Mail to ${to}: ${link}`);
+};
+
+function defaultLocalDelivery(env: NodeJS.ProcessEnv): LocalDelivery | null {
+  return env.NODE_ENV === 'production' || env.NODE_ENV === 'test' ? null : printLinks;
+}
+
 /**
  * Sends mail through nodemailer. Without SMTP_URL (development and tests) it first starts a local
  * fake SMTP server (smtp-server) on a free loopback port that accepts everything and files each
  * message in the outbox table, where admins read it; with SMTP_URL it sends for real and keeps a
- * copy in the outbox. Header values with CR or LF are refused: they would let a caller add headers.
+ * copy in the outbox. The outbox copy has its link tokens masked (mask.ts): a sign-up or reset
+ * link is for its owner, not for the admins or whoever holds a copy of the database. Header values
+ * with CR or LF are refused: they would let a caller add headers.
  */
-export async function createMailer(outbox: OutboxRepository, smtpUrl?: string): Promise<Mailer> {
+export async function createMailer(
+  outbox: OutboxRepository,
+  smtpUrl?: string,
+  options: MailerOptions = {},
+): Promise<Mailer> {
+  const localDelivery = smtpUrl
+    ? null
+    : options.localDelivery === undefined
+      ? defaultLocalDelivery(process.env)
+      : options.localDelivery;
   let fake: SMTPServer | null = null;
   let transportUrl = smtpUrl;
   if (!smtpUrl) {
@@ -33,13 +66,15 @@ export async function createMailer(outbox: OutboxRepository, smtpUrl?: string): 
         simpleParser(stream)
           .then(async (parsed) => {
             const to = Array.isArray(parsed.to) ? parsed.to[0]?.text : parsed.to?.text;
-            await outbox.add({
-              at: new Date().toISOString(),
-              to: (to ?? '').toLowerCase(),
-              subject: parsed.subject ?? '',
-              text: parsed.text ?? '',
-              template: String(parsed.headers.get('x-conductory-template') ?? 'unknown'),
-            });
+            await outbox.add(
+              maskMail({
+                at: new Date().toISOString(),
+                to: (to ?? '').toLowerCase(),
+                subject: parsed.subject ?? '',
+                text: parsed.text ?? '',
+                template: String(parsed.headers.get('x-conductory-template') ?? 'unknown'),
+              }),
+            );
             callback();
           })
           .catch((error: Error) => callback(error));
@@ -64,13 +99,16 @@ export async function createMailer(outbox: OutboxRepository, smtpUrl?: string): 
         headers: { 'X-Conductory-Template': content.template },
       });
       if (smtpUrl)
-        await outbox.add({
-          at: new Date().toISOString(),
-          to: to.toLowerCase(),
-          subject: content.subject,
-          text: content.text,
-          template: content.template,
-        });
+        await outbox.add(
+          maskMail({
+            at: new Date().toISOString(),
+            to: to.toLowerCase(),
+            subject: content.subject,
+            text: content.text,
+            template: content.template,
+          }),
+        );
+      else localDelivery?.(to.toLowerCase(), content);
     },
     async close() {
       transport.close();

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { AccountRepositories } from '../db/account-repositories';
 import { ProblemError } from '../http/problem';
+import { maskMail } from '../mail/mask';
 import type { OutboxRepository } from '../mail/outbox-repository';
 import { publicUser } from '../services/accounts';
 import type { KeyService } from '../services/keys';
@@ -11,7 +12,7 @@ export function adminRouter(
   keys: KeyService,
   outbox: OutboxRepository,
 ): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
 
   router.get('/users', async (_req, res) => {
     const users = await repos.users.list();
@@ -67,7 +68,17 @@ export function adminRouter(
   });
 
   router.get('/audit', async (req, res) => {
-    const rows = await repos.audit.list(Number(req.query.limit ?? 200));
+    // openapi.yaml's rule again (integer 1..1000): the validator coerces 'Infinity' to a number,
+    // and Knex drops a limit that is not an integer, which listed the whole log.
+    const limit = Number(req.query.limit ?? 200);
+    if (!Number.isInteger(limit) || limit < 1 || limit > 1000)
+      throw new ProblemError(
+        400,
+        'Bad request',
+        '/query/limit: must be an integer from 1 to 1000',
+        [{ path: '/query/limit', message: 'must be an integer from 1 to 1000' }],
+      );
+    const rows = await repos.audit.list(limit);
     res.json({
       items: rows.map((r: Record<string, unknown>) => ({
         id: r.id,
@@ -83,7 +94,9 @@ export function adminRouter(
 
   router.get('/admin/outbox', async (req, res) => {
     const to = typeof req.query.to === 'string' ? req.query.to : undefined;
-    res.json({ items: await outbox.list(Number(req.query.limit ?? 100), to) });
+    // The mailer files them masked; masked again here for messages an older version filed.
+    const items = await outbox.list(Number(req.query.limit ?? 100), to);
+    res.json({ items: items.map(maskMail) });
   });
 
   return router;

@@ -8,7 +8,7 @@ export function authRouter(
   throttles: RequestHandler[],
   production: boolean,
 ): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
 
   router.post('/auth/sign-up', ...throttles, async (req, res) => {
     await accounts.signUp(req.body, req.ip);

@@ -43,6 +43,10 @@ const uploadErrors: ErrorRequestHandler = (error, _req, _res, next) => {
       ),
     );
   }
+  // busboy's own complaints (no boundary, a body cut short) arrive as plain Errors: still the
+  // client's malformed upload, not a fault of ours.
+  if (error instanceof Error && /^(Multipart|Unexpected end of form|Malformed)/.test(error.message))
+    return next(new ProblemError(400, 'Bad request', error.message));
   next(error);
 };
 
@@ -58,7 +62,7 @@ export function curationRouter(
     address?: string;
   }) => Promise<unknown>,
 ): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
 
   router.post('/revisions', async (req, res) => {
     res.status(201).json(await curation.propose(userOf(req), req.body, req.ip));

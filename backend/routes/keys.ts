@@ -16,7 +16,7 @@ function person(req: Request) {
 }
 
 export function keysRouter(keys: KeyService, repos: AccountRepositories): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
 
   router.get('/keys', async (req, res) => {
     res.json({ items: await keys.list(person(req).userId) });
@@ -43,7 +43,13 @@ export function keysRouter(keys: KeyService, repos: AccountRepositories): Router
 
   router.get('/usage', async (req, res) => {
     const p = req.principal as { userId: number };
+    // openapi.yaml's rule again (integer 1..366): the validator coerces 'Infinity' to a number,
+    // and a date that far back is an invalid time value.
     const days = Number(req.query.days ?? 30);
+    if (!Number.isInteger(days) || days < 1 || days > 366)
+      throw new ProblemError(400, 'Bad request', '/query/days: must be an integer from 1 to 366', [
+        { path: '/query/days', message: 'must be an integer from 1 to 366' },
+      ]);
     const from = new Date(Date.now() - (days - 1) * 86_400_000).toISOString().slice(0, 10);
     res.json({ from, items: await repos.usage.ofUser(p.userId, from) });
   });

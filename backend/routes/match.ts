@@ -13,7 +13,7 @@ interface MatchBody {
 }
 
 export function matchRouter(catalogue: CatalogueStore): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
   router.post('/match', async (req, res) => {
     const body = req.body as MatchBody;
     const reading = {

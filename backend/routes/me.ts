@@ -5,7 +5,7 @@ import { publicUser } from '../services/accounts';
 
 /** The signed-in person, and the stacks they keep on their account. */
 export function meRouter(repos: AccountRepositories): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
   const userId = (req: { principal: { kind: string; userId?: number } }) => req.principal.userId!;
 
   router.get('/me', async (req, res) => {

@@ -5,7 +5,7 @@ import type { StackRepository } from '../db/stack-repository';
 import type { CatalogueStore } from '../services/catalogue-store';
 
 export function stacksRouter(stacks: StackRepository, catalogue: CatalogueStore): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
   router.get('/stacks', async (_req, res) => {
     const table = await catalogue.get();
     const items = (await stacks.listBuiltIn()).map((s) => {

@@ -1,5 +1,6 @@
 import { valueOf } from '../../shared/catalogue/alloy-record';
 import { awgDiameter } from '../../shared/physics/awg';
+import { OutsideModelError } from '../../shared/physics/errors';
 import type { CoilGeometry } from '../../shared/physics/coil';
 import type { ConductorLayer } from '../../shared/physics/dodd-deeds';
 import type { StackLayer } from '../../shared/physics/stack';
@@ -33,6 +34,41 @@ export interface ResolvedMaterial {
 const invalid = (path: string, message: string) =>
   new ProblemError(400, 'Bad request', `${path}: ${message}`, [{ path, message }]);
 
+/**
+ * Smallest coil, wire and blank dimension the models take, m. Both treat a winding as a
+ * continuum of turns and a blank as bulk metal; no coil or blank is made below a micrometre
+ * (thin-film coils, the smallest, are tens of micrometres across: common practice, no source).
+ * Far below it the arithmetic fails too: the Dodd–Deeds scale πµ0N²/[h²(r2 − r1)²] divides by a
+ * square that underflows to zero, and a wire's cross-section with it.
+ */
+export const MIN_DIMENSION_M = 1e-6;
+/**
+ * Thinnest layer, m: a nanometre is a few atoms, far below the tens of nanometres under which a
+ * metal film stops having its bulk conductivity (Fuchs–Sondheimer size effect); the models take
+ * any layer at its bulk σ, so a flash plating is already at their edge.
+ */
+export const MIN_LAYER_M = 1e-9;
+
+/**
+ * Highest conductivity the models take, S/m. The best normal metals reach about 1e11–1e12 S/m
+ * only as very pure crystals a few kelvin above absolute zero (copper and aluminium of residual
+ * resistance ratio in the tens of thousands; figures recalled, not re-checked); beyond is a
+ * superconductor, which no eddy-current model here describes. A tiny resistivity (1e-300 Ω·m)
+ * gives σ near the largest double, where the layer recursion overflows.
+ */
+export const MAX_CONDUCTIVITY_S_PER_M = 1e12;
+
+const um = (m: number) => `${Number((m * 1e6).toPrecision(3))} µm`;
+
+function atLeast(valueM: number, minM: number, path: string, what: string): number {
+  if (!(valueM >= minM))
+    throw new OutsideModelError(
+      path,
+      `${what} is ${um(valueM)}, below the ${um(minM)} these models hold for`,
+    );
+  return valueM;
+}
+
 /** An alloy of the table (nominal values) or a material given by its conductivity. */
 export function resolveMaterial(
   material: MaterialInput,
@@ -48,8 +84,18 @@ export function resolveMaterial(
       densityKgPerM3: valueOf(found.record, 'density')?.nominal ?? null,
     };
   }
+  const conductivitySPerM = siFromRequest(
+    'conductivity',
+    material.conductivity,
+    `${path}/conductivity`,
+  );
+  if (conductivitySPerM > MAX_CONDUCTIVITY_S_PER_M)
+    throw new OutsideModelError(
+      `${path}/conductivity`,
+      `a conductivity of ${Number(conductivitySPerM.toPrecision(3))} S/m is above the ${MAX_CONDUCTIVITY_S_PER_M} S/m of the best metal at a few kelvin: these models describe no superconductor`,
+    );
   return {
-    conductivitySPerM: siFromRequest('conductivity', material.conductivity, `${path}/conductivity`),
+    conductivitySPerM,
     relativePermeability: material.relativePermeability ?? 1,
     densityKgPerM3: material.density
       ? siFromRequest('density', material.density, `${path}/density`)
@@ -62,10 +108,16 @@ export function coilFromRequest(coil: CoilInput, path: string): CoilGeometry {
   const outerRadiusM = siFromRequest('length', coil.outerRadius, `${path}/outerRadius`);
   if (outerRadiusM <= innerRadiusM)
     throw invalid(`${path}/outerRadius`, 'the outer radius must be larger than the inner radius');
+  atLeast(outerRadiusM, MIN_DIMENSION_M, `${path}/outerRadius`, "the coil's outer radius");
   return {
     innerRadiusM,
     outerRadiusM,
-    lengthM: siFromRequest('length', coil.length, `${path}/length`),
+    lengthM: atLeast(
+      siFromRequest('length', coil.length, `${path}/length`),
+      MIN_DIMENSION_M,
+      `${path}/length`,
+      "the coil's length",
+    ),
     turns: coil.turns,
   };
 }
@@ -83,11 +135,21 @@ export function wireFromRequest(
   if (coil.wireDiameter && coil.awg !== undefined)
     throw invalid(`${path}/awg`, 'give a wire diameter or an AWG, not both');
   const wireDiameterM = coil.wireDiameter
-    ? siFromRequest('length', coil.wireDiameter, `${path}/wireDiameter`)
+    ? atLeast(
+        siFromRequest('length', coil.wireDiameter, `${path}/wireDiameter`),
+        MIN_DIMENSION_M,
+        `${path}/wireDiameter`,
+        "the wire's diameter",
+      )
     : coil.awg !== undefined
       ? awgDiameter(coil.awg)
-      : Math.sqrt(
-          ((geometry.outerRadiusM - geometry.innerRadiusM) * geometry.lengthM) / geometry.turns,
+      : atLeast(
+          Math.sqrt(
+            ((geometry.outerRadiusM - geometry.innerRadiusM) * geometry.lengthM) / geometry.turns,
+          ),
+          MIN_DIMENSION_M,
+          `${path}/turns`,
+          'the wire that these turns leave room for in the winding section',
         );
   const conductorSPerM = coil.conductor
     ? resolveMaterial(coil.conductor, `${path}/conductor`, catalogue).conductivitySPerM
@@ -114,9 +176,13 @@ export function sensorLayersFromRequest(
     return {
       conductivitySPerM: m.conductivitySPerM,
       relativePermeability: m.relativePermeability,
-      thicknessM: siFromRequest('length', layer.thickness, `${path}/${i}/thickness`),
+      thicknessM: layerThickness(layer.thickness, `${path}/${i}/thickness`),
     };
   });
+}
+
+function layerThickness(thickness: Quantity, path: string): number {
+  return atLeast(siFromRequest('length', thickness, path), MIN_LAYER_M, path, 'the layer');
 }
 
 export function blankLayersFromRequest(
@@ -135,7 +201,7 @@ export function blankLayersFromRequest(
       conductivitySPerM: m.conductivitySPerM,
       relativePermeability: m.relativePermeability,
       densityKgPerM3: m.densityKgPerM3,
-      thicknessM: siFromRequest('length', layer.thickness, `${path}/${i}/thickness`),
+      thicknessM: layerThickness(layer.thickness, `${path}/${i}/thickness`),
     };
   });
 }

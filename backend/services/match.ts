@@ -1,5 +1,12 @@
 import { restsOnMemory, type AlloyRecord } from '../../shared/catalogue/alloy-record';
+import { formatCelsius } from '../../shared/match/format';
 import { scoreCandidate, type MatchReading } from '../../shared/match/score';
+import { OutsideModelError } from '../../shared/physics/errors';
+import { InvalidQuantityError } from '../../shared/units/errors';
+import {
+  LINEAR_LAW_RANGE_K,
+  withinLinearLawRange,
+} from '../../shared/units/temperature-correction';
 
 export interface MatchCandidate {
   slug: string;
@@ -16,15 +23,35 @@ export interface MatchCandidate {
 /** Candidates below this score are noise: a reading some three uncertainties outside the range. */
 const MIN_SCORE = 0.005;
 
-/** Ranks every alloy against a reading, best first, and keeps the first `limit`. */
+/**
+ * Ranks every alloy against a reading, best first, and keeps the first `limit`. A reading taken
+ * where the linear temperature correction does not hold is refused (OutsideModelError on
+ * /body/temperature, a 422) rather than corrected into nonsense.
+ */
 export function matchReading(
   alloys: AlloyRecord[],
   reading: MatchReading,
   limit: number,
 ): MatchCandidate[] {
+  const t = reading.temperatureK;
+  if (t !== undefined && !withinLinearLawRange(t)) {
+    const { min, max } = LINEAR_LAW_RANGE_K;
+    throw new OutsideModelError(
+      '/body/temperature',
+      `a reading at ${formatCelsius(t)} (${Number(t.toFixed(2))} K) is outside ${formatCelsius(min)} to ${formatCelsius(max)} (${min} K to ${max} K), where a linear temperature coefficient corrects conductivity`,
+    );
+  }
   const candidates: MatchCandidate[] = [];
   for (const alloy of alloys) {
-    const result = scoreCandidate(reading, alloy);
+    let result;
+    try {
+      result = scoreCandidate(reading, alloy);
+    } catch (error) {
+      // This alloy's own coefficient (a curated figure) turns the linear law negative here:
+      // it cannot be compared with this reading, the others still can.
+      if (error instanceof InvalidQuantityError) continue;
+      throw error;
+    }
     if (!result || result.score < MIN_SCORE) continue;
     candidates.push({
       slug: alloy.slug,

@@ -4,6 +4,7 @@ import {
   type ConductorLayer,
   type DoddDeedsKernel,
 } from './dodd-deeds';
+import { OutsideModelError } from './errors';
 
 export interface ApparentConductivityPoint {
   frequencyHz: number;
@@ -59,15 +60,20 @@ function referenceCurve(
   pMin: number,
   pMax: number,
   l0: number,
+  deadline?: number,
 ): Curve {
-  const decades = Math.log10(pMax / pMin);
+  // Differences of logs, not the log of a ratio that overflows when the sweep spans 300 decades.
+  const decades = Math.log10(pMax) - Math.log10(pMin);
   const n = Math.max(8, Math.ceil(decades * POINTS_PER_DECADE));
   const logP = new Float64Array(n);
   const re = new Float64Array(n);
   const im = new Float64Array(n);
   const f = 1 / (2 * Math.PI); // ω = 1: the conductivity of the layer is then ωσ itself
   for (let i = 0; i < n; i++) {
-    logP[i] = Math.log(pMin) + (i / (n - 1)) * Math.log(pMax / pMin);
+    // A sweep over hundreds of decades makes thousands of points: the deadline holds here too.
+    if (deadline !== undefined && (i & 15) === 0 && performance.now() > deadline)
+      throw new ComputeTimeExceededError();
+    logP[i] = Math.log(pMin) + (i / (n - 1)) * (Math.log(pMax) - Math.log(pMin));
     const p = impedanceAt(
       kernel,
       [{ conductivitySPerM: Math.exp(logP[i]!), relativePermeability: 1, thicknessM }],
@@ -170,7 +176,7 @@ export function apparentConductivitySweep(
   const omegas = frequenciesHz.map((f) => 2 * Math.PI * f);
   const pMin = Math.min(...omegas) * SIGMA_RANGE[0];
   const pMax = Math.max(...omegas) * SIGMA_RANGE[1];
-  const curve = referenceCurve(kernel, thickness, pMin, pMax, l0);
+  const curve = referenceCurve(kernel, thickness, pMin, pMax, l0, options.deadline);
   const n = curve.re.length;
   const points: ApparentConductivityPoint[] = [];
   for (const [index, frequencyHz] of frequenciesHz.entries()) {
@@ -197,10 +203,19 @@ export function apparentConductivitySweep(
     const x = nearestOnCurve(curve, tRe, tIm, Math.max(lo, best - 1), Math.min(hi, best + 1));
     const [fRe, fIm] = curveAt(curve, x);
     const logP = curve.logP[0]! + (x / (n - 1)) * (curve.logP[n - 1]! - curve.logP[0]!);
+    const apparent = Math.exp(logP) / omega;
+    const fitResidual = Math.hypot(fRe - tRe, fIm - tIm) / Math.hypot(tRe, tIm);
+    // The stack changes the coil's impedance by nothing a double holds (ΔZ = 0 at so low a
+    // ωσ): no instrument reads it, and the fit's distance relative to it is 0/0.
+    if (!Number.isFinite(fitResidual) || !Number.isFinite(apparent))
+      throw new OutsideModelError(
+        `/body/frequencies/${index}`,
+        `at ${frequencyHz} Hz this stack changes the coil's impedance by too little to read (normalised ΔZ ${Math.hypot(tRe, tIm)}): raise the frequency`,
+      );
     points.push({
       frequencyHz,
-      apparentConductivitySPerM: Math.exp(logP) / omega,
-      fitResidual: Math.hypot(fRe - tRe, fIm - tIm) / Math.hypot(tRe, tIm),
+      apparentConductivitySPerM: apparent,
+      fitResidual,
       normalizedResistance: stack.normalizedResistance,
       normalizedReactance: stack.normalizedReactance,
     });

@@ -264,15 +264,17 @@ export function impedanceAt(
   const deltaR = -omega * kernel.scale * iIm;
   const deltaX = omega * kernel.scale * iRe;
   const x0 = omega * inductanceInAirH;
+  // The ratios with ω cancelled: at a frequency so low that ωL0 underflows they stay finite.
+  const deltaL = kernel.scale * iRe;
   return {
     frequencyHz,
     inductanceInAirH,
     reactanceInAirOhm: x0,
     deltaResistanceOhm: deltaR,
     deltaReactanceOhm: deltaX,
-    inductanceOverConductorH: (x0 + deltaX) / omega,
+    inductanceOverConductorH: inductanceInAirH + deltaL,
     resistanceOverConductorOhm: deltaR,
-    normalizedResistance: deltaR / x0,
-    normalizedReactance: (x0 + deltaX) / x0,
+    normalizedResistance: (-kernel.scale * iIm) / inductanceInAirH,
+    normalizedReactance: 1 + deltaL / inductanceInAirH,
   };
 }

@@ -5,7 +5,8 @@ import {
   type CoilGeometry,
   type Filament,
 } from './coil';
-import { STANDARD_GRAVITY } from './constants';
+import { MU0, STANDARD_GRAVITY } from './constants';
+import { OutsideModelError } from './errors';
 import {
   mutualInductance,
   mutualInductanceAndGradient,
@@ -15,7 +16,6 @@ import {
 import { integrateRk45, StepLimitError } from './rk45';
 import { stackMass, type Stack } from './stack';
 import { ComputeTimeExceededError } from './apparent-conductivity';
-import { skinDepth } from './skin-depth';
 
 export interface CapacitorBank {
   capacitanceF: number;
@@ -123,7 +123,9 @@ function blankSlices(
   const parts: Part[] = [];
   let z = gapM;
   for (const l of blank.layers) {
-    const delta = skinDepth(pulseHz, l.conductivitySPerM, 1);
+    // Standard depth at the pulse's frequency (skin-depth.ts), Infinity for a layer that barely
+    // conducts: such a layer is thin against it and joins its neighbour.
+    const delta = 1 / Math.sqrt(Math.PI * pulseHz * MU0 * 1 * l.conductivitySPerM);
     parts.push({
       z0: z,
       t: l.thicknessM,
@@ -200,6 +202,45 @@ function blankFilaments(slices: Slice[], radiusM: number, radial: number): Blank
   return out;
 }
 
+const metres = (m: number) => `${Number(m.toPrecision(3))} m`;
+
+/**
+ * The thin-ring formula L = µ0·a·(ln(8a/g) − 2) holds for a cross-section small against its
+ * ring, and turns negative once g > 8a/e²: a filament that fat is outside the filament model.
+ * Left unchecked, a negative self-inductance lets the circuit make energy (a 5 mm aluminium slug
+ * of 20 mm under the default filaments left at 56 times the energy stored).
+ */
+function requireThinRings(cells: Filament[], field: string, what: string, advice: string): void {
+  for (const c of cells) {
+    if (thinRingSelfInductance(c.radiusM, c.gmdM) > 0) continue;
+    throw new OutsideModelError(
+      field,
+      `a filament of the ${what} (a ring of ${metres(c.radiusM)} radius, about ${metres(c.gmdM / 0.2235)} across its cross-section) is not small against its ring, where the filament model holds: ${advice}`,
+    );
+  }
+}
+
+/** True when a symmetric matrix is positive definite (Cholesky runs to the end with positive pivots). */
+function positiveDefinite(matrix: Float64Array, n: number): boolean {
+  const l = new Float64Array(n * n);
+  for (let j = 0; j < n; j++) {
+    let d = matrix[j * n + j]!;
+    for (let k = 0; k < j; k++) d -= l[j * n + k]! ** 2;
+    if (!(d > 0)) return false;
+    const root = Math.sqrt(d);
+    l[j * n + j] = root;
+    for (let i = j + 1; i < n; i++) {
+      let v = matrix[i * n + j]!;
+      for (let k = 0; k < j; k++) v -= l[i * n + k]! * l[j * n + k]!;
+      l[i * n + j] = v / root;
+    }
+  }
+  return true;
+}
+
+const COARSE_FILAMENTS =
+  'use more filaments (filaments.coilRadial, coilAxial, blankRadial), each then small against the gap, or a wider gap';
+
 /** Inverse of a small dense symmetric matrix by Gauss–Jordan with partial pivoting. */
 function invert(matrix: Float64Array, n: number): Float64Array {
   const a = Float64Array.from(matrix);
@@ -251,8 +292,19 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   const theta = (input.launchAngleDeg * Math.PI) / 180;
   const gAxis = STANDARD_GRAVITY * Math.sin(theta);
   const mass = stackMass(blank);
+  if (!(mass > 0 && Number.isFinite(mass)))
+    throw new OutsideModelError(
+      '/body/blank/diameter',
+      `a blank ${metres(blank.diameterM)} across has no mass a double can hold`,
+    );
 
   const coilCells = coilFilaments(coil, counts.coilRadial, counts.coilAxial);
+  requireThinRings(
+    coilCells,
+    '/body/coil',
+    'drive coil',
+    'give more coil filaments (filaments.coilRadial, filaments.coilAxial), or a winding section small against its radius',
+  );
   const l1 = selfInductanceFromFilaments(coilCells);
   const r1 =
     bank.seriesResistanceOhm + windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
@@ -265,6 +317,18 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     pulseHz,
   );
   const cells = blankFilaments(slices, blank.diameterM / 2, counts.blankRadial);
+  requireThinRings(
+    cells,
+    '/body/blank',
+    'blank',
+    'give more filaments through its thickness (filaments.blankPerLayer) or fewer across it (filaments.blankRadial)',
+  );
+  const leaky = cells.find((c) => !(c.resistanceOhm > 0 && Number.isFinite(c.resistanceOhm)));
+  if (leaky)
+    throw new OutsideModelError(
+      '/body/blank/layers',
+      'the blank conducts too little to carry an eddy current this model can compute: its layers need a conductivity',
+    );
   const nb = cells.length;
 
   // The blank's own inductance matrix is constant (it moves rigidly): invert it once.
@@ -286,6 +350,13 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       lb[j * nb + i] = m;
     }
   }
+  // The circuits must store energy for any currents: a matrix that is not positive definite lets
+  // them make it, and the integration runs away (1e148 A from a 33 J bank).
+  if (!positiveDefinite(lb, nb))
+    throw new OutsideModelError(
+      '/body/filaments',
+      `the blank's filaments couple more tightly than their self-inductances allow: ${COARSE_FILAMENTS}`,
+    );
   const lbInv = invert(lb, nb);
 
   const mk = new Float64Array(nb);
@@ -320,6 +391,22 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   const x = new Float64Array(nb);
   const u = new Float64Array(nb);
   let lastForce = 0;
+
+  // The same for the whole circuit at rest on the coil face, where the coupling is strongest: the
+  // coil's inductance with the blank's currents free, L1 − mᵀLb⁻¹m, must stay positive. Thin-line
+  // mutuals between filaments closer than their own cross-sections can drive it below zero.
+  coupling(0);
+  let shielded = l1;
+  for (let r = 0; r < nb; r++) {
+    let su = 0;
+    for (let c = 0; c < nb; c++) su += lbInv[r * nb + c]! * mk[c]!;
+    shielded -= mk[r]! * su;
+  }
+  if (!(shielded > 0))
+    throw new OutsideModelError(
+      '/body/filaments',
+      `the drive coil and the blank couple more tightly than the filament model allows (the coil's inductance with the blank present comes out at ${Number(shielded.toPrecision(3))} H): ${COARSE_FILAMENTS}`,
+    );
 
   const derivative = (_t: number, y: Float64Array, dy: Float64Array) => {
     const s = y[is]!;

@@ -1,4 +1,5 @@
 import { MU0 } from './constants';
+import { OutsideModelError } from './errors';
 
 /**
  * Standard depth of penetration δ = 1/√(π·f·µ0·µr·σ), m: the depth at which eddy-current density
@@ -18,7 +19,15 @@ export function skinDepth(
   if (!(frequencyHz > 0) || !(conductivitySPerM > 0) || !(relativePermeability > 0)) {
     throw new RangeError('skin depth needs a positive frequency, conductivity and permeability');
   }
-  return 1 / Math.sqrt(Math.PI * frequencyHz * MU0 * relativePermeability * conductivitySPerM);
+  const depth =
+    1 / Math.sqrt(Math.PI * frequencyHz * MU0 * relativePermeability * conductivitySPerM);
+  // f·σ so small that their product underflows: deeper than any length a double holds.
+  if (!Number.isFinite(depth))
+    throw new OutsideModelError(
+      '/body',
+      `at ${frequencyHz} Hz and ${conductivitySPerM} S/m the standard depth is beyond any length this service can express: raise the frequency`,
+    );
+  return depth;
 }
 
 /**

@@ -12,7 +12,7 @@ import { createOutboxRepository } from '../../backend/mail/outbox-repository';
 import { createAccountRepositories } from '../../backend/db/account-repositories';
 import { createKeyService } from '../../backend/services/keys';
 import { bearer, newKey, signedIn } from '../helpers/access';
-import { TEST_PUBLIC_URL } from '../helpers/test-app';
+import { mailCapture, TEST_PUBLIC_URL } from '../helpers/test-app';
 
 // A file database, so the test can read the bytes on disk for plaintext secrets.
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'conductory-access-'));
@@ -22,18 +22,23 @@ let app: ReturnType<typeof createApp>;
 let mailer: Awaited<ReturnType<typeof createMailer>>;
 const jwtSecret = crypto.randomBytes(32);
 const unlimited = { visitor: 1e6, reader: 1e6, integrator: 1e6, curator: 1e6, admin: 1e6 };
+// The newcomer's own mailbox: the mailer's local delivery (the admin Outbox masks tokens).
+const mail = mailCapture();
 
 beforeAll(async () => {
   await prepareDatabase(knex, { demo: true, demoAccounts: true });
-  mailer = await createMailer(createOutboxRepository(knex));
+  mailer = await createMailer(createOutboxRepository(knex), undefined, {
+    localDelivery: mail.localDelivery,
+  });
   app = createApp({
     knex,
     mailer,
     jwtSecret,
     publicUrl: () => TEST_PUBLIC_URL,
+    publicOrigin: TEST_PUBLIC_URL,
     serveClient: false,
     rateLimits: unlimited,
-    credentialLimits: { perAddress: 1e6, perAccount: 1e6 },
+    credentialLimits: { perAddress: 1e6, perAccount: 1e6, perAccountCeiling: 1e6 },
   });
 });
 afterAll(async () => {
@@ -58,14 +63,15 @@ async function outboxFor(email: string) {
 describe('sign-up, verification through the local outbox, sign-in', () => {
   let verifyToken = '';
 
-  it('sign-up → 202, and the verification message lands in the outbox', async () => {
+  it('sign-up → 202, and the verification message lands in the outbox with its token masked', async () => {
     const res = await request(app).post('/api/v1/auth/sign-up').send(newcomer);
     expect(res.status).toBe(202);
-    const mail = (await outboxFor(newcomer.email)).find((m) => m.template === 'verification');
-    expect(mail?.subject).toMatch(/Confirm your e-mail/);
-    const link = /http:\/\/conductory\.test\/verify\?token=(\S+)/.exec(mail!.text);
-    expect(link).not.toBeNull();
-    verifyToken = link![1]!;
+    verifyToken = mail.tokenFor(newcomer.email, 'verification');
+    expect(verifyToken).toMatch(/^[A-Za-z0-9_-]{20,}$/);
+    const filed = (await outboxFor(newcomer.email)).find((m) => m.template === 'verification');
+    expect(filed?.subject).toMatch(/Confirm your e-mail/);
+    expect(filed?.text).toContain('http://conductory.test/verify?token=••••••••');
+    expect(filed?.text).not.toContain(verifyToken);
   });
 
   it('the same answer for an address that already has an account (no enumeration)', async () => {
@@ -146,8 +152,10 @@ describe('password reset by e-mail', () => {
       .post('/api/v1/auth/reset-request')
       .send({ email: 'nobody@ridgeline.example' });
     expect(unknown.status).toBe(202);
-    const mail = (await outboxFor(newcomer.email)).find((m) => m.template === 'reset')!;
-    const token = /reset\?token=(\S+)/.exec(mail.text)![1]!;
+    const token = mail.tokenFor(newcomer.email, 'reset');
+    const filed = (await outboxFor(newcomer.email)).find((m) => m.template === 'reset')!;
+    expect(filed.text).toContain('/reset?token=••••••••');
+    expect(filed.text).not.toContain(token);
     newcomer.password = 'zinc-brass-copper-43';
     expect(
       (await request(app).post('/api/v1/auth/reset').send({ token, password: newcomer.password }))
@@ -176,10 +184,10 @@ describe('API keys', () => {
     });
     const call = await request(app).get('/api/v1/alloys?q=brass').set(bearer(created.key));
     expect(call.status).toBe(200);
-    const mail = (await outboxFor('integrator@carrowbay.example')).find(
+    const keyMail = (await outboxFor('integrator@carrowbay.example')).find(
       (m) => m.template === 'key-created',
     );
-    expect(mail?.text).toContain(created.prefix);
+    expect(keyMail?.text).toContain(created.prefix);
   });
 
   it('counts usage per key per day per route group', async () => {

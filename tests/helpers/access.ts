@@ -1,15 +1,20 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { demoAccounts } from '../../seeds/demo/accounts';
+import { TEST_PUBLIC_URL } from './test-app';
 
 export type DemoRole = 'reader' | 'integrator' | 'curator' | 'admin';
 
 export const demo = (role: DemoRole) => demoAccounts.find((a) => a.role === role)!;
 
-/** A supertest agent signed in as one of the demo accounts (the cookie kept between calls). */
+/**
+ * A supertest agent signed in as one of the demo accounts (the cookie kept between calls). Like a
+ * browser on the test app's page, it sends that page's Origin with every request: a cookie write
+ * without it is refused (backend/auth/same-origin.ts).
+ */
 export async function signedIn(app: Express, role: DemoRole | { email: string; password: string }) {
   const who = typeof role === 'string' ? demo(role) : role;
-  const agent = request.agent(app);
+  const agent = request.agent(app).set('Origin', TEST_PUBLIC_URL);
   const res = await agent
     .post('/api/v1/auth/sign-in')
     .send({ email: who.email, password: who.password });

@@ -9,7 +9,17 @@ export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
 export interface RunningProduct {
   url: string;
+  /** Everything the product printed so far (stdout and stderr), e.g. development's mail links. */
+  readonly output: string;
   stop: () => Promise<void>;
+}
+
+/** This process's environment less what the test runner added (NODE_ENV, VITEST…). */
+export function personEnv(): NodeJS.ProcessEnv {
+  const env = { ...process.env };
+  for (const name of Object.keys(env))
+    if (name === 'NODE_ENV' || name.startsWith('VITEST') || name === 'TEST') delete env[name];
+  return env;
 }
 
 /**
@@ -20,12 +30,12 @@ export async function startProduct(): Promise<RunningProduct> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'conductory-e2e-'));
   const child: ChildProcess = spawn('npm', ['start'], {
     cwd: projectRoot,
+    // The environment a person has: theirs, with no NODE_ENV (vitest sets it to 'test').
     env: {
-      ...process.env,
+      ...personEnv(),
       PORT: '0',
       HOST: '127.0.0.1',
       DATABASE_FILE: path.join(dataDir, 'e2e.sqlite'),
-      NODE_ENV: 'development',
       LOG_LEVEL: 'warn',
     },
     detached: true,
@@ -54,6 +64,9 @@ export async function startProduct(): Promise<RunningProduct> {
   });
   return {
     url,
+    get output() {
+      return output;
+    },
     stop: async () => {
       if (child.exitCode === null) {
         const exited = new Promise((r) => child.once('exit', r));

@@ -4,7 +4,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { JWT_AUDIENCE, JWT_ISSUER } from '../../../backend/auth/session-tokens';
 import { bearer, newKey, sessionCookieOf, signedIn, demo } from '../../helpers/access';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { createTestApp, TEST_PUBLIC_URL, type TestApp } from '../../helpers/test-app';
 
 let t: TestApp;
 let sessionId = '';
@@ -132,7 +132,10 @@ describe('API2 authentication: sessions and keys end at once', () => {
       .send({ email: demo('curator').email, password: demo('curator').password });
     const token = sessionCookieOf(res.headers['set-cookie'])!;
     expect((await me(token)).status).toBe(200);
-    await request(t.app).post('/api/v1/auth/sign-out').set('Cookie', `conductory_session=${token}`);
+    await request(t.app)
+      .post('/api/v1/auth/sign-out')
+      .set('Origin', TEST_PUBLIC_URL)
+      .set('Cookie', `conductory_session=${token}`);
     expect((await me(token)).status).toBe(401);
   });
   it('a malformed Authorization header or a non-key bearer → 401', async () => {

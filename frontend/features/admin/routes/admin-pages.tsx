@@ -129,7 +129,8 @@ export function OutboxPage() {
     <div className="flex flex-col gap-3">
       <p className="text-sm text-ink/70">
         Every message the service sent; in development they go to a local fake mail server and stop
-        here.
+        here. Sign-up and reset links are masked: they belong to the person they were sent to. In
+        development the server&rsquo;s terminal prints each link for the developer who runs it.
       </p>
       {outbox.isError ? <ProblemMessage error={outbox.error} /> : null}
       {outbox.data?.items.length === 0 ? <p>No mail yet.</p> : null}

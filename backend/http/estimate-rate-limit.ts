@@ -1,0 +1,45 @@
+import type { RequestHandler } from 'express';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import type { Caller } from '../auth/roles';
+import { ProblemError } from './problem';
+
+/**
+ * Calculations per minute by caller, on top of the general limit: one launch costs as much CPU
+ * as thousands of look-ups, so an anonymous address gets a few a minute, not a hundred.
+ */
+export type EstimateLimits = Record<Caller, number>;
+export const DEFAULT_ESTIMATE_LIMITS: EstimateLimits = {
+  visitor: 20,
+  reader: 120,
+  integrator: 600,
+  curator: 240,
+  admin: 240,
+};
+
+/** Applies to the calculations (POSTs tagged `estimates` in openapi.yaml); others pass untouched. */
+export function estimateRateLimit(limits: EstimateLimits): RequestHandler {
+  const limiter = rateLimit({
+    windowMs: 60_000,
+    limit: (req) => limits[req.principal.role],
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: (req) => {
+      const p = req.principal;
+      if (p.kind === 'key') return `estimates:key:${p.keyId}`;
+      if (p.kind === 'session') return `estimates:user:${p.userId}`;
+      return `estimates:ip:${ipKeyGenerator(req.ip ?? '')}`;
+    },
+    handler: (_req, res, next) =>
+      next(
+        new ProblemError(
+          429,
+          'Too many requests',
+          `Calculations are limited for your role: try again in ${String(res.getHeader('retry-after') ?? 60)} s, or sign in or use an API key for a higher allowance.`,
+        ),
+      ),
+  });
+  return (req, res, next) =>
+    req.method === 'POST' && req.operation?.tags.includes('estimates')
+      ? limiter(req, res, next)
+      : next();
+}

@@ -1,0 +1,63 @@
+import type { RequestHandler } from 'express';
+import { ProblemError, type FieldError } from './problem';
+
+/** 'Infinity', '-infinity', 'NaN', '+nan': words that Number() and the validator's coercion turn into non-finite numbers. */
+const NON_FINITE_WORD = /^\s*[+-]?(infinity|nan)\s*$/i;
+/** A decimal numeral (what the validator would coerce to a number), e.g. 1e999. */
+const NUMERAL = /^\s*[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?\s*$/i;
+
+/** JSON pointer escaping (RFC 6901) of one key. */
+const escapeKey = (key: string) => key.replace(/~/g, '~0').replace(/\//g, '~1');
+
+function nonFiniteText(value: string): boolean {
+  return NON_FINITE_WORD.test(value) || (NUMERAL.test(value) && !Number.isFinite(Number(value)));
+}
+
+/** Query values are strings, or arrays and objects of them under the extended parser. */
+function walkQuery(value: unknown, path: string, out: FieldError[]): void {
+  if (typeof value === 'string') {
+    if (nonFiniteText(value))
+      out.push({ path, message: `'${value.trim()}' is not a finite number` });
+  } else if (Array.isArray(value)) {
+    value.forEach((v, i) => walkQuery(v, `${path}/${i}`, out));
+  } else if (value && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) walkQuery(v, `${path}/${escapeKey(k)}`, out);
+  }
+}
+
+/** JSON bodies: JSON.parse reads 1e999 as Infinity; no other way to a non-finite number exists. */
+function walkBody(value: unknown, path: string, out: FieldError[], depth = 0): void {
+  if (out.length >= 20 || depth > 64) return;
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) out.push({ path, message: 'must be a finite number' });
+  } else if (Array.isArray(value)) {
+    value.forEach((v, i) => walkBody(v, `${path}/${i}`, out, depth + 1));
+  } else if (value && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value))
+      walkBody(v, `${path}/${escapeKey(k)}`, out, depth + 1);
+  }
+}
+
+/**
+ * Refuses non-finite numbers at the edge, before the validator and any handler see them: a
+ * query value such as `Infinity`, `NaN` or `1e999` (the validator coerces those to numbers that
+ * pass `type: integer` or slip past a maximum), and a JSON number that overflowed to Infinity.
+ * Answers 400 problem+json naming each field (/query/days, /body/conductivity/value).
+ */
+export const refuseNonFinite: RequestHandler = (req, _res, next) => {
+  const errors: FieldError[] = [];
+  const query = req.query as unknown;
+  if (query && typeof query === 'object') {
+    for (const [k, v] of Object.entries(query)) walkQuery(v, `/query/${escapeKey(k)}`, errors);
+  }
+  if (req.body !== undefined && req.is('application/json')) walkBody(req.body, '/body', errors);
+  if (errors.length === 0) return next();
+  next(
+    new ProblemError(
+      400,
+      'Bad request',
+      errors.map((e) => `${e.path}: ${e.message}`).join('; '),
+      errors,
+    ),
+  );
+};

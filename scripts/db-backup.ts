@@ -1,0 +1,34 @@
+/**
+ * `npm run db:backup -- --to FILE`: an online backup of the database (DATABASE_FILE, default
+ * data/conductory.sqlite) while the server may be running. Exit 0 with the rows counted, 1 when the
+ * copy could not be made or failed its integrity check (nothing is left at FILE then), 2 on usage.
+ * Keep the JWT secret with it: see README, "Backups".
+ */
+import { parseArgs } from 'node:util';
+import { readConfig } from '../backend/config';
+import { backupDatabase, BackupError, describeSummary } from '../backend/db/backup';
+
+let to: string | undefined;
+try {
+  ({
+    values: { to },
+  } = parseArgs({ options: { to: { type: 'string' } } }));
+} catch (error) {
+  console.error(`db:backup: ${(error as Error).message}`);
+  process.exit(2);
+}
+if (!to) {
+  console.error('usage: npm run db:backup -- --to FILE');
+  process.exit(2);
+}
+
+const { databaseFile } = readConfig();
+try {
+  const summary = await backupDatabase(databaseFile, to);
+  console.log(`Backed up ${databaseFile} to ${to}: integrity_check ok.`);
+  console.log(describeSummary(summary));
+} catch (error) {
+  console.error(`db:backup: ${(error as Error).message}`);
+  if (!(error instanceof BackupError)) console.error(error);
+  process.exit(1);
+}
