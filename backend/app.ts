@@ -6,7 +6,7 @@ import * as OpenApiValidator from 'express-openapi-validator';
 import helmet from 'helmet';
 import type { Knex } from 'knex';
 import type { DestinationStream } from 'pino';
-import swaggerUi from 'swagger-ui-express';
+import compression from 'compression';
 import { loadApiDocument } from './api-document';
 import { authenticate } from './auth/authenticate';
 import { enforceRoles } from './auth/enforce-roles';
@@ -40,6 +40,8 @@ import { createAlloyRepository } from './db/alloy-repository';
 import { createReadingRepository } from './db/reading-repository';
 import { createStackRepository } from './db/stack-repository';
 import { apiNotFound, problemHandler } from './http/problem';
+import { apiReference } from './http/api-reference';
+import { staticClient } from './http/static-client';
 import { refuseNonFinite } from './http/refuse-non-finite';
 import { clientDist } from './paths';
 import { alloysRouter } from './routes/alloys';
@@ -117,6 +119,8 @@ export function createApp(options: AppOptions): Express {
     }),
   );
   app.use(requestLog(options.logLevel ?? 'silent', options.logStream));
+  // gzip or brotli, as the client accepts, for the API and the front end's files alike.
+  app.use(compression());
   // Before any handler: a request under /api/v1 is one operation of openapi.yaml, or a 404/405.
   app.use(resolveOperation(apiDocument));
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT }));
@@ -124,11 +128,7 @@ export function createApp(options: AppOptions): Express {
   app.use('/api', refuseNonFinite);
 
   // Swagger UI goes before the validator, which would otherwise refuse its undocumented paths.
-  app.use(
-    '/api/docs',
-    swaggerUi.serve,
-    swaggerUi.setup(loadApiDocument(), { customSiteTitle: 'Conductory API reference' }),
-  );
+  app.use(apiReference(loadApiDocument()));
   app.get('/api/openapi.json', (_req, res) => {
     res.json(loadApiDocument());
   });
@@ -192,13 +192,8 @@ export function createApp(options: AppOptions): Express {
   app.use('/api/v1', v1);
   app.use('/api', apiNotFound);
 
-  if (options.serveClient !== false && fs.existsSync(path.join(clientDist, 'index.html'))) {
-    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
-    // Every other GET is a front-end route: the React router takes it from index.html.
-    app.get('/{*splat}', (_req, res) => {
-      res.sendFile(path.join(clientDist, 'index.html'));
-    });
-  }
+  if (options.serveClient !== false && fs.existsSync(path.join(clientDist, 'index.html')))
+    app.use(staticClient(clientDist));
 
   app.use(problemHandler);
   return app;

@@ -8,6 +8,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { projectRoot } from '../backend/paths';
 import { benchPhysics } from './physics';
+import { initialJavaScript, INITIAL_JS_BUDGET_KB } from './initial-js';
 import { heaviestLaunch } from '../tests/helpers/launches';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
@@ -138,6 +139,14 @@ console.log(
     `max ${h.latency.max.toFixed(1)} ms, errors ${h.errors + h.non2xx}` +
     `\n  launch answers: ${[...saturated.statuses].map(([s, n]) => `${n} × ${s}`).join(', ')}` +
     `\n  (aim, issue 8: p99 under 50 ms)`,
+);
+
+const js = initialJavaScript();
+console.log(
+  js
+    ? `\nInitial JavaScript of the front end: ${js.files.length} files, ${js.rawKb.toFixed(0)} kB, ` +
+        `${js.gzipKb.toFixed(1)} kB gzip (budget ${INITIAL_JS_BUDGET_KB} kB gzip)`
+    : '\nInitial JavaScript: no build in dist/client (run npm run build first)',
 );
 
 // BENCH_PHYSICS=0 skips the engine's comparison with SciPy (about a minute).

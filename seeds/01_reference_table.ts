@@ -104,6 +104,7 @@ export async function seed(knex: Knex): Promise<void> {
         magnetic: a.magnetic !== undefined,
         relative_permeability: a.magnetic ? a.magnetic.relativePermeability[0] : 1,
         composition_json: JSON.stringify(a.composition),
+        aliases_json: JSON.stringify(a.aliases ?? []),
         condition: a.condition,
         notes: a.notes ?? null,
         status: 'published',

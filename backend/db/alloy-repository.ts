@@ -15,6 +15,7 @@ interface AlloyRow {
   magnetic: number | boolean;
   relative_permeability: number;
   composition_json: string;
+  aliases_json: string;
   condition: string | null;
   notes: string | null;
   status: 'published' | 'draft';
@@ -78,6 +79,7 @@ export function createAlloyRepository(knex: Knex): AlloyRepository {
         name: a.name,
         family: a.family,
         uns: a.uns,
+        aliases: JSON.parse(a.aliases_json) as string[],
         magnetic: Boolean(a.magnetic),
         relativePermeability: a.relative_permeability,
         composition: JSON.parse(a.composition_json) as Record<string, number>,

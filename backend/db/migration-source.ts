@@ -3,6 +3,7 @@ import * as createReferenceTable from '../../migrations/20261201120000_create_re
 import * as createStacksAndReadings from '../../migrations/20261201120100_create_stacks_and_readings';
 import * as createAccounts from '../../migrations/20261201130000_create_accounts';
 import * as createCuration from '../../migrations/20261201140000_create_curation';
+import * as addAlloyAliases from '../../migrations/20261201230000_add_alloy_aliases';
 
 /**
  * Migrations listed statically: Knex's directory loading cannot import .ts files under vitest,
@@ -14,6 +15,7 @@ export const migrations: Record<string, Knex.Migration> = {
   '20261201120100_create_stacks_and_readings': createStacksAndReadings,
   '20261201130000_create_accounts': createAccounts,
   '20261201140000_create_curation': createCuration,
+  '20261201230000_add_alloy_aliases': addAlloyAliases,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

@@ -39,6 +39,7 @@ function parseQuery(req: Request): CatalogueQuery {
 function detail(record: AlloyRecord, item: CatalogueItem) {
   return {
     ...item,
+    aliases: record.aliases ?? [],
     composition: Object.entries(record.composition).map(([element, massPercent]) => ({
       element,
       massPercent,
@@ -54,7 +55,7 @@ export function alloysRouter(
   releases: ReleaseService,
   measurementsOf: (slug: string) => Promise<Measurement[]>,
 ): Router {
-  const router = Router();
+  const router = Router({ caseSensitive: true, strict: true });
   /** The live table, or the one a release froze (`?release=2026.12.0`). */
   const tableFor = (req: Request) =>
     typeof req.query.release === 'string' ? releases.catalogue(req.query.release) : catalogue.get();

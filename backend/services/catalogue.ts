@@ -1,6 +1,5 @@
-import Fuse from 'fuse.js';
 import { restsOnMemory, valueOf, type AlloyRecord } from '../../shared/catalogue/alloy-record';
-import { elementNames } from '../../shared/catalogue/element-names';
+import { AlloySearch } from '../../shared/catalogue/search';
 import { isResistivityUnit, percentIacs, toSiemensPerMetre } from '../../shared/units/conductivity';
 import { toKilogramsPerCubicMetre } from '../../shared/units/density';
 
@@ -44,7 +43,6 @@ export interface CataloguePage {
 interface Indexed {
   record: AlloyRecord;
   item: CatalogueItem;
-  elements: string;
 }
 
 function toItem(record: AlloyRecord): CatalogueItem {
@@ -76,35 +74,20 @@ const compareBy: Record<
 
 /**
  * The searchable catalogue: the published table held in memory (a few hundred rows at most) with a
- * fuzzy index over name, UNS number, family and elements. Rebuilt when the table changes.
+ * search index over UNS numbers, element symbols, names, aliases, family words and element names
+ * (shared/catalogue/search.ts says how it ranks). Rebuilt when the table changes.
  */
 export class Catalogue {
   private readonly entries: Indexed[];
   private readonly bySlug: Map<string, Indexed>;
-  private readonly fuse: Fuse<Indexed>;
-  /** Fuzzy hits per search text: the table is immutable for this object's life, so they never go stale. */
+  private readonly index: AlloySearch;
+  /** Hits per search text: the table is immutable for this object's life, so they never go stale. */
   private readonly hitCache = new Map<string, CatalogueItem[]>();
 
   constructor(records: AlloyRecord[]) {
-    this.entries = records.map((record) => ({
-      record,
-      item: toItem(record),
-      elements: Object.keys(record.composition)
-        .map((symbol) => `${symbol} ${elementNames[symbol] ?? ''}`)
-        .join(' '),
-    }));
+    this.entries = records.map((record) => ({ record, item: toItem(record) }));
     this.bySlug = new Map(this.entries.map((e) => [e.record.slug, e]));
-    this.fuse = new Fuse(this.entries, {
-      keys: [
-        { name: 'item.name', weight: 3 },
-        { name: 'item.uns', weight: 3 },
-        { name: 'item.family', weight: 1 },
-        { name: 'elements', weight: 1 },
-      ],
-      threshold: 0.35,
-      ignoreLocation: true,
-      includeScore: true,
-    });
+    this.index = new AlloySearch(records);
   }
 
   get size(): number {
@@ -120,11 +103,11 @@ export class Catalogue {
     return this.entries.map((e) => e.record);
   }
 
-  private fuzzyHits(text: string): CatalogueItem[] {
+  private hits(text: string): CatalogueItem[] {
     const key = text.toLowerCase();
     let hits = this.hitCache.get(key);
     if (!hits) {
-      hits = this.fuse.search(text).map((hit) => hit.item.item);
+      hits = this.index.search(text).map((record) => this.bySlug.get(record.slug)!.item);
       if (this.hitCache.size >= HIT_CACHE_SIZE)
         this.hitCache.delete(this.hitCache.keys().next().value!);
       this.hitCache.set(key, hits);
@@ -134,7 +117,7 @@ export class Catalogue {
 
   search(query: CatalogueQuery): CataloguePage {
     const text = query.q?.trim() ?? '';
-    let items = text ? this.fuzzyHits(text) : this.entries.map((e) => e.item);
+    let items = text ? this.hits(text) : this.entries.map((e) => e.item);
     items = items.filter((item) => matchesFilters(item, query));
     const sort = query.sort ?? (text ? 'relevance' : 'name');
     const descending = sort.startsWith('-');

@@ -1,6 +1,6 @@
 import { restsOnMemory, type AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { formatCelsius } from '../../shared/match/format';
-import { scoreCandidate, type MatchReading } from '../../shared/match/score';
+import { scoreCandidate, type MatchReading, type ScoredRange } from '../../shared/match/score';
 import { OutsideModelError } from '../../shared/physics/errors';
 import { InvalidQuantityError } from '../../shared/units/errors';
 import {
@@ -17,6 +17,8 @@ export interface MatchCandidate {
   fromMemory: boolean;
   score: number;
   correctedConductivitySPerM: number;
+  conductivityRangeSPerM: ScoredRange;
+  densityRangeKgPerM3: ScoredRange | null;
   reasons: string[];
 }
 
@@ -62,6 +64,8 @@ export function matchReading(
       fromMemory: restsOnMemory(alloy),
       score: Number(result.score.toFixed(4)),
       correctedConductivitySPerM: result.correctedConductivitySPerM,
+      conductivityRangeSPerM: result.conductivityRangeSPerM,
+      densityRangeKgPerM3: result.densityRangeKgPerM3,
       reasons: result.reasons,
     });
   }

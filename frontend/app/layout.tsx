@@ -1,5 +1,6 @@
-import { NavLink, Outlet, useNavigate, useNavigation } from 'react-router-dom';
-import { useMe, useSignOut } from '../lib/session';
+import { useId, useRef, useState, type KeyboardEvent, type MouseEvent } from 'react';
+import { NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
+import { signInPath, useMe, useSignOut } from '../lib/session';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `rounded px-3 py-1.5 text-sm font-medium ${isActive ? 'bg-paper text-patina-900' : 'text-patina-50 hover:bg-patina-700'}`;
@@ -27,20 +28,24 @@ function Mark() {
   );
 }
 
-/** Who is signed in, with their pages; or the way in. */
+/** Who is signed in, with their pages; or the way in (coming back to this page afterwards). */
 function AccountArea() {
   const me = useMe();
   const signOut = useSignOut();
   const navigate = useNavigate();
+  const location = useLocation();
   if (!me.data) {
     return (
-      <NavLink to="/sign-in" className={linkClass}>
+      <NavLink to={signInPath(`${location.pathname}${location.search}`)} className={linkClass}>
         Sign in
       </NavLink>
     );
   }
   return (
-    <div className="flex flex-wrap items-center gap-1">
+    <div className="flex flex-col gap-1 lg:flex-row lg:flex-wrap lg:items-center">
+      <p className="px-3 text-xs text-patina-100 lg:hidden">
+        Signed in as {me.data.email} ({me.data.role})
+      </p>
       {me.data.role === 'curator' || me.data.role === 'admin' ? (
         <NavLink to="/review" className={linkClass}>
           Review Desk
@@ -56,7 +61,7 @@ function AccountArea() {
       ) : null}
       <button
         type="button"
-        className="rounded px-3 py-1.5 text-sm text-patina-50 hover:bg-patina-700"
+        className="rounded px-3 py-1.5 text-left text-sm text-patina-50 hover:bg-patina-700"
         title={`${me.data.email} (${me.data.role})`}
         onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/') })}
       >
@@ -66,8 +71,34 @@ function AccountArea() {
   );
 }
 
+/** Three bars that become a cross while the menu is open. */
+function MenuIcon({ open }: { open: boolean }) {
+  return (
+    <svg aria-hidden="true" viewBox="0 0 20 20" className="h-5 w-5">
+      {open ? (
+        <path d="M5 5l10 10M15 5L5 15" stroke="currentColor" strokeWidth="2" />
+      ) : (
+        <path d="M3 5h14M3 10h14M3 15h14" stroke="currentColor" strokeWidth="2" />
+      )}
+    </svg>
+  );
+}
+
 export function Layout() {
   const navigation = useNavigation();
+  // Below 1024 px the navigation folds behind one button, so the header keeps to one row.
+  const [menuOpen, setMenuOpen] = useState(false);
+  const menuButton = useRef<HTMLButtonElement>(null);
+  const menuId = useId();
+  const closeOnLink = (e: MouseEvent) => {
+    if ((e.target as HTMLElement).closest('a, button')) setMenuOpen(false);
+  };
+  const closeOnEscape = (e: KeyboardEvent) => {
+    if (e.key === 'Escape' && menuOpen) {
+      setMenuOpen(false);
+      menuButton.current?.focus();
+    }
+  };
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -77,32 +108,50 @@ export function Layout() {
         Skip to content
       </a>
       <header className="bg-patina-900 text-white">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-3 gap-y-1 px-4 py-2.5 lg:flex-nowrap">
           <NavLink to="/" className="flex items-center gap-2 text-lg font-semibold tracking-tight">
             <Mark />
             Conductory
           </NavLink>
-          <nav aria-label="Main" className="flex flex-wrap gap-1">
-            <NavLink to="/" end className={linkClass}>
-              Catalogue
-            </NavLink>
-            <NavLink to="/match" className={linkClass}>
-              Match
-            </NavLink>
-            <NavLink to="/layer-lab" className={linkClass}>
-              Layer Lab
-            </NavLink>
-            <NavLink to="/pulse-bench" className={linkClass}>
-              Pulse Bench
-            </NavLink>
-            <a
-              href="/api/docs/"
-              className="rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700"
-            >
-              API reference
-            </a>
-          </nav>
-          <AccountArea />
+          <button
+            ref={menuButton}
+            type="button"
+            className="flex items-center gap-1.5 rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700 lg:hidden"
+            aria-expanded={menuOpen}
+            aria-controls={menuId}
+            onClick={() => setMenuOpen((open) => !open)}
+          >
+            <MenuIcon open={menuOpen} />
+            Menu
+          </button>
+          <div
+            id={menuId}
+            className={`${menuOpen ? 'flex' : 'hidden'} w-full flex-col gap-2 border-t border-patina-700 pt-2 pb-1 lg:flex lg:w-auto lg:flex-1 lg:flex-row lg:items-center lg:justify-between lg:border-0 lg:p-0`}
+            onClick={closeOnLink}
+            onKeyDown={closeOnEscape}
+          >
+            <nav aria-label="Main" className="flex flex-col gap-1 lg:flex-row lg:flex-wrap">
+              <NavLink to="/" end className={linkClass}>
+                Catalogue
+              </NavLink>
+              <NavLink to="/match" className={linkClass}>
+                Match
+              </NavLink>
+              <NavLink to="/layer-lab" className={linkClass}>
+                Layer Lab
+              </NavLink>
+              <NavLink to="/pulse-bench" className={linkClass}>
+                Pulse Bench
+              </NavLink>
+              <a
+                href="/api/docs/"
+                className="rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700"
+              >
+                API reference
+              </a>
+            </nav>
+            <AccountArea />
+          </div>
         </div>
         <div
           role="progressbar"
@@ -114,7 +163,7 @@ export function Layout() {
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">
         <Outlet />
       </main>
-      <footer className="border-t border-patina-100 text-xs text-ink/60">
+      <footer className="border-t border-patina-100 text-xs text-ink/70">
         <div className="mx-auto max-w-6xl px-4 py-3">
           Conductory: conductivity and density of metals and alloys, every value with its source.
           Values at 20 °C unless stated.

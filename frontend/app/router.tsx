@@ -1,10 +1,47 @@
-import { createBrowserRouter, Navigate } from 'react-router-dom';
+import { createBrowserRouter, Navigate, type RouteObject } from 'react-router-dom';
 import { alloyListQueryOptions } from '../features/catalogue/api/list-alloys';
 import { apiQueryFromFilters, filtersFromSearch } from '../features/catalogue/filters';
 import { CatalogueRoute } from '../features/catalogue/routes/catalogue-route';
 import { queryClient } from '../lib/query-client';
 import { Layout } from './layout';
+import { NotFoundPage } from './not-found';
+import { RequireRole } from './require-role';
 import { RouteError } from './route-error';
+
+/** Administration and its pages (the guard around it is in the router below). */
+const ADMIN: RouteObject = {
+  path: 'admin',
+  lazy: async () => ({
+    Component: (await import('../features/admin/routes/admin-route')).AdminRoute,
+  }),
+  children: [
+    { index: true, element: <Navigate to="/admin/users" replace /> },
+    {
+      path: 'users',
+      lazy: async () => ({
+        Component: (await import('../features/admin/routes/admin-pages')).UsersPage,
+      }),
+    },
+    {
+      path: 'keys',
+      lazy: async () => ({
+        Component: (await import('../features/admin/routes/admin-pages')).KeysPage,
+      }),
+    },
+    {
+      path: 'audit',
+      lazy: async () => ({
+        Component: (await import('../features/admin/routes/admin-pages')).AuditPage,
+      }),
+    },
+    {
+      path: 'outbox',
+      lazy: async () => ({
+        Component: (await import('../features/admin/routes/admin-pages')).OutboxPage,
+      }),
+    },
+  ],
+};
 
 export const router = createBrowserRouter([
   {
@@ -88,52 +125,35 @@ export const router = createBrowserRouter([
             }),
           },
           {
-            path: 'review',
-            lazy: async () => ({
-              Component: (await import('../features/review-desk/routes/review-desk-route'))
-                .ReviewDeskRoute,
-            }),
-          },
-          {
-            path: 'access',
-            lazy: async () => ({
-              Component: (await import('../features/access/routes/access-route')).AccessRoute,
-            }),
-          },
-          {
-            path: 'admin',
-            lazy: async () => ({
-              Component: (await import('../features/admin/routes/admin-route')).AdminRoute,
-            }),
+            element: <RequireRole screen="the Review Desk" roles={['curator', 'admin']} />,
             children: [
-              { index: true, element: <Navigate to="/admin/users" replace /> },
               {
-                path: 'users',
+                path: 'review',
                 lazy: async () => ({
-                  Component: (await import('../features/admin/routes/admin-pages')).UsersPage,
-                }),
-              },
-              {
-                path: 'keys',
-                lazy: async () => ({
-                  Component: (await import('../features/admin/routes/admin-pages')).KeysPage,
-                }),
-              },
-              {
-                path: 'audit',
-                lazy: async () => ({
-                  Component: (await import('../features/admin/routes/admin-pages')).AuditPage,
-                }),
-              },
-              {
-                path: 'outbox',
-                lazy: async () => ({
-                  Component: (await import('../features/admin/routes/admin-pages')).OutboxPage,
+                  Component: (await import('../features/review-desk/routes/review-desk-route'))
+                    .ReviewDeskRoute,
                 }),
               },
             ],
           },
-          { path: '*', element: <RouteError /> },
+          {
+            element: (
+              <RequireRole screen="Access" roles={['reader', 'integrator', 'curator', 'admin']} />
+            ),
+            children: [
+              {
+                path: 'access',
+                lazy: async () => ({
+                  Component: (await import('../features/access/routes/access-route')).AccessRoute,
+                }),
+              },
+            ],
+          },
+          {
+            element: <RequireRole screen="Administration" roles={['admin']} />,
+            children: [ADMIN],
+          },
+          { path: '*', element: <NotFoundPage /> },
         ],
       },
     ],

@@ -100,3 +100,38 @@ export function NumberField({
     </div>
   );
 }
+
+/** Wire by gauge or by bare diameter: 'awg' for American Wire Gauge, else a length unit. */
+export const wireChoices = ['awg', 'mm', 'mil'];
+const wireLabel = (unit: string) => (unit === 'awg' ? 'AWG' : unitLabel(unit));
+
+/** The message for a wire entry that cannot be used, or undefined when it is fine. */
+export function wireProblem(entry: LengthEntry): string | undefined {
+  if (entry.unit === 'awg')
+    return Number.isInteger(entry.value) && entry.value >= -3 && entry.value <= 56
+      ? undefined
+      : 'a gauge from -3 (0000) to 56';
+  return Number.isFinite(entry.value) && entry.value > 0 ? undefined : 'greater than zero';
+}
+
+/** The wire of a coil: a gauge (AWG) or a bare diameter in mm or mil. */
+export function WireField({
+  entry,
+  onChange,
+  error,
+}: {
+  entry: LengthEntry;
+  onChange: (next: LengthEntry) => void;
+  error?: string;
+}) {
+  return (
+    <LengthField
+      label="Wire (gauge or diameter)"
+      entry={entry}
+      units={wireChoices}
+      labelFor={wireLabel}
+      error={error}
+      onChange={onChange}
+    />
+  );
+}

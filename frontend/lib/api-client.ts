@@ -1,5 +1,23 @@
 import type { Problem } from './api-types';
 
+/** One input the service refused: where (the request field, dotted) and why. */
+export interface FieldProblem {
+  /** As the service wrote it, e.g. /body/source/citation. */
+  path: string;
+  /** The request field without its location, dotted: source.citation ('' for the whole body). */
+  field: string;
+  message: string;
+}
+
+/** '/body/source/citation' → 'source.citation'; '/query/q' → 'q'; '/body' → ''. */
+export function fieldOfPath(path: string): string {
+  return path
+    .replace(/^\/(body|query|path|params|headers)(?=\/|$)/, '')
+    .split('/')
+    .filter(Boolean)
+    .join('.');
+}
+
 /** Every non-2xx answer becomes one of these, whatever the route. */
 export class ApiProblem extends Error {
   constructor(readonly problem: Problem) {
@@ -8,6 +26,19 @@ export class ApiProblem extends Error {
   }
   get status(): number {
     return this.problem.status;
+  }
+  /** The field-level reasons, each (field, message) once: the validator may repeat one. */
+  get fieldProblems(): FieldProblem[] {
+    const seen = new Set<string>();
+    const out: FieldProblem[] = [];
+    for (const e of this.problem.errors ?? []) {
+      const field = fieldOfPath(e.path);
+      const id = `${field}\u0000${e.message}`;
+      if (seen.has(id)) continue;
+      seen.add(id);
+      out.push({ path: e.path, field, message: e.message });
+    }
+    return out;
   }
 }
 

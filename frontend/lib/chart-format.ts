@@ -1,5 +1,10 @@
-/** Series colours for up to four compared blanks: ours, distinct in hue and in lightness. */
-export const seriesColours = ['#1d5c51', '#b8642e', '#4a5a8a', '#8a7a1e'];
+import { formatFrequency, formatLength, formatTick } from './format';
+
+/**
+ * Series colours for up to four compared blanks: ours, distinct in hue and in lightness, and
+ * dark enough (5:1 or more on white) to colour the blanks' names as text.
+ */
+export const seriesColours = ['#1d5c51', '#a15424', '#4a5a8a', '#766818'];
 
 /** Decade ticks between two frequencies, for log axes. */
 export function decadeTicks(min: number, max: number): number[] {
@@ -11,14 +16,33 @@ export function decadeTicks(min: number, max: number): number[] {
   return ticks;
 }
 
-export function formatHertz(hz: number): string {
-  if (hz >= 1e6) return `${Number((hz / 1e6).toPrecision(3))} MHz`;
-  if (hz >= 1e3) return `${Number((hz / 1e3).toPrecision(3))} kHz`;
-  return `${Number(hz.toPrecision(3))} Hz`;
+/** Tick and tooltip text for charts: the number style of format.ts. */
+export const formatHertz = formatFrequency;
+export const formatMetres = formatLength;
+export const tickNumber = (v: unknown) => formatTick(Number(v));
+
+/** The smallest round number (1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8 × 10ⁿ) at or above x > 0. */
+function niceAbove(x: number): number {
+  const step = 10 ** Math.floor(Math.log10(x));
+  for (const m of [1, 1.2, 1.5, 2, 2.5, 3, 4, 5, 6, 8, 10])
+    if (m * step >= x * (1 - 1e-12)) return m * step;
+  return 10 * step;
 }
 
-export function formatMetres(m: number): string {
-  if (m >= 1) return `${Number(m.toPrecision(3))} m`;
-  if (m >= 1e-3) return `${Number((m * 1e3).toPrecision(3))} mm`;
-  return `${Number((m * 1e6).toPrecision(3))} µm`;
+/**
+ * An axis domain that holds the data and every reference line drawn on it, with a little room
+ * and round ends; a line outside the domain would be clipped or drawn off the plot.
+ */
+export function domainIncluding(
+  values: number[],
+  { floorZero = false, pad = 0.04 }: { floorZero?: boolean; pad?: number } = {},
+): [number, number] {
+  const finite = values.filter((v) => Number.isFinite(v));
+  if (!finite.length) return [0, 1];
+  let lo = Math.min(...finite);
+  let hi = Math.max(...finite);
+  const span = hi - lo || Math.abs(hi) || 1;
+  lo = floorZero ? Math.min(0, lo) : lo - span * pad;
+  hi = hi + span * pad;
+  return [lo, hi > 0 ? niceAbove(hi) : hi];
 }

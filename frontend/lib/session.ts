@@ -32,3 +32,30 @@ export function useSignOut() {
     onSettled: () => client.setQueryData(sessionKeys.me, null),
   });
 }
+
+/**
+ * A `next` location to return to after signing in, if it is a path on this site; anything else
+ * (another origin, `//host`, `/\host`, a scheme, the sign-in page itself) gives null, so a link
+ * can never send a person off the site after they sign in.
+ */
+export function safeReturnPath(next: string | null | undefined): string | null {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\'))
+    return null;
+  // Backslashes and control characters: browsers read some of them as another host.
+  if (next.includes('\\') || [...next].some((c) => c.charCodeAt(0) < 0x20)) return null;
+  let url: URL;
+  try {
+    url = new URL(next, window.location.origin);
+  } catch {
+    return null;
+  }
+  if (url.origin !== window.location.origin) return null;
+  if (['/sign-in', '/sign-up', '/reset', '/verify'].includes(url.pathname)) return null;
+  return `${url.pathname}${url.search}${url.hash}`;
+}
+
+/** The sign-in page's address that comes back to `here` (a path with its query) afterwards. */
+export function signInPath(here: string): string {
+  const next = safeReturnPath(here);
+  return next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in';
+}

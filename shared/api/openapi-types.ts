@@ -586,7 +586,8 @@ export interface paths {
          * Upload alloys or a measurement set (CSV or JSON); a dry run unless apply=true
          * @description Every row is checked; a file with any bad row is refused whole (422, each problem with its
          *     row and field) and changes nothing. With apply=true a clean file becomes one pending
-         *     revision, reviewed as a unit. Limits: 2 MiB, one file, 5000 rows.
+         *     revision, reviewed as a unit. Limits: one file, 5000 rows; CSV up to 20 MiB
+         *     (parsed as it streams in), JSON up to 2 MiB.
          */
         post: operations["importFile"];
         delete?: never;
@@ -753,6 +754,8 @@ export interface components {
             slug: string;
             name: string;
             uns: string | null;
+            /** @description Other names the trade uses for this alloy (Muntz metal, German silver, 18-8). */
+            aliases: string[];
             family: components["schemas"]["Family"];
             magnetic: boolean;
             relativePermeability: number;
@@ -797,10 +800,24 @@ export interface components {
             family: components["schemas"]["Family"];
             magnetic: boolean;
             fromMemory: boolean;
+            /** @description How well the reading (and its density, when given) fits the alloy's ranges within the stated uncertainty: 1 inside both ranges near the nominal, falling towards 0 as the reading lies further outside. It ranks candidates; it is no probability. */
             score: number;
             /** @description The reading corrected to this alloy's reference temperature. */
             correctedConductivitySPerM: number;
+            /** @description The alloy's conductivity range at its reference temperature as the score used it (a nominal alone is widened by ±2 %). */
+            conductivityRangeSPerM: components["schemas"]["ScoredRange"];
+            /** @description The alloy's density range as the score used it; null when the table has none. */
+            densityRangeKgPerM3: {
+                min: number;
+                nominal: number;
+                max: number;
+            } | null;
             reasons: string[];
+        };
+        ScoredRange: {
+            min: number;
+            nominal: number;
+            max: number;
         };
         MatchResult: {
             reading: {
@@ -1181,7 +1198,7 @@ export interface operations {
             query?: {
                 /** @description Read the table as this release froze it (e.g. 2026.12.0). */
                 release?: components["parameters"]["Release"];
-                /** @description Fuzzy search over name, UNS number, family and elements. */
+                /** @description Search text: an exact UNS number or slug returns that alloy alone; an element symbol (Ni, Sn) lists the alloys containing it, richest first; words match names, trade aliases, family words and element names; a typo falls back to a fuzzy match. A space may be sent as + or %20. */
                 q?: string;
                 family?: components["schemas"]["Family"][];
                 magnetic?: boolean;

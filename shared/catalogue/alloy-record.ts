@@ -30,6 +30,11 @@ export interface AlloyRecord {
   name: string;
   family: string;
   uns: string | null;
+  /**
+   * Other names the trade uses ("Muntz metal", "German silver"), for search. Absent in release
+   * snapshots made before aliases were stored.
+   */
+  aliases?: string[];
   magnetic: boolean;
   relativePermeability: number;
   composition: Record<string, number>;

@@ -11,8 +11,19 @@ export interface MatchReading {
   uncertaintyPercent: number;
 }
 
+/** A handbook range as the score used it (a nominal alone widened by ±2 %), SI. */
+export interface ScoredRange {
+  min: number;
+  nominal: number;
+  max: number;
+}
+
 export interface CandidateScore {
   score: number;
+  /** The alloy's conductivity range at its reference temperature, S/m. */
+  conductivityRangeSPerM: ScoredRange;
+  /** The alloy's density range, kg/m³, when the table has one. */
+  densityRangeKgPerM3: ScoredRange | null;
   /** The reading corrected to the alloy's reference temperature, S/m. */
   correctedConductivitySPerM: number;
   reasons: string[];
@@ -80,9 +91,9 @@ export function scoreCandidate(reading: MatchReading, alloy: AlloyRecord): Candi
   }
 
   const density = valueOf(alloy, 'density');
+  const dMin = density ? (density.min ?? density.nominal * (1 - DEFAULT_HALF_RANGE)) : 0;
+  const dMax = density ? (density.max ?? density.nominal * (1 + DEFAULT_HALF_RANGE)) : 0;
   if (reading.densityKgPerM3 !== undefined && density) {
-    const dMin = density.min ?? density.nominal * (1 - DEFAULT_HALF_RANGE);
-    const dMax = density.max ?? density.nominal * (1 + DEFAULT_HALF_RANGE);
     const du = (DENSITY_UNCERTAINTY_PERCENT / 100) * reading.densityKgPerM3;
     const fit = closeness(reading.densityKgPerM3, density.nominal, dMin, dMax, du);
     score *= fit;
@@ -99,5 +110,11 @@ export function scoreCandidate(reading: MatchReading, alloy: AlloyRecord): Candi
       'magnetic: a ferromagnetic part reads through its permeability as well as its conductivity; check it with a magnet',
     );
   }
-  return { score, correctedConductivitySPerM: sigma, reasons };
+  return {
+    score,
+    correctedConductivitySPerM: sigma,
+    conductivityRangeSPerM: { min, nominal, max },
+    densityRangeKgPerM3: density ? { min: dMin, nominal: density.nominal, max: dMax } : null,
+    reasons,
+  };
 }

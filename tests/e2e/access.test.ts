@@ -90,7 +90,7 @@ describe('a newcomer signs up, verifies by the mailed link, signs in and uses a 
     expect(key).toMatch(/^cdy_/);
     await page.screenshot({ path: shot('e2e-access-new-key'), fullPage: true });
     await page.getByRole('button', { name: 'I have stored it' }).click();
-    await page.getByRole('cell', { name: 'line 3 tooling' }).waitFor();
+    await page.getByRole('cell', { name: 'line 3 tooling', exact: true }).waitFor();
   });
 
   it('the key calls the API, and the usage shows up', async () => {

@@ -34,7 +34,7 @@ describe('curation, as two curators use it in Chromium', () => {
   it('one curator proposes a change with a source', async () => {
     await author.goto(`${product.url}/alloys/red-brass-c23000`);
     await author.getByText('Propose a change (curators)').click();
-    await author.getByLabel('Conductivity, nominal (%IACS)').fill('36.5');
+    await author.getByLabel('Conductivity, nominal', { exact: true }).fill('36.5');
     await author
       .getByLabel('Source: citation (required)')
       .fill('Strip certificates, lot 12 (invented for the test)');
@@ -46,7 +46,7 @@ describe('curation, as two curators use it in Chromium', () => {
 
   it('another approves it on the Review Desk', async () => {
     await reviewer.goto(`${product.url}/review`);
-    const card = reviewer.getByRole('listitem').filter({ hasText: 'red-brass-c23000' });
+    const card = reviewer.getByRole('listitem').filter({ hasText: 'Red brass 85/15' });
     await card.waitFor();
     await expect(card.textContent()).resolves.toMatch(/Strip certificates, lot 12/);
     await reviewer.screenshot({ path: shot('e2e-review-desk'), fullPage: true });
@@ -57,7 +57,7 @@ describe('curation, as two curators use it in Chromium', () => {
 
   it('the change shows in the Alloy sheet’s history with both names', async () => {
     await author.goto(`${product.url}/alloys/red-brass-c23000`);
-    const row = author.getByRole('row').filter({ hasText: 'values.conductivity' });
+    const row = author.getByRole('row').filter({ hasText: /Conductivity.*36\.5 %IACS/ });
     await row.waitFor();
     const text = (await row.textContent()) ?? '';
     expect(text).toContain('curator@carrowbay.example');

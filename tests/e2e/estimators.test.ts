@@ -39,6 +39,13 @@ describe('the estimators, as a person uses them in Chromium', () => {
     await expect(caution.textContent()).resolves.toMatch(/can kill/);
     await session.page.reload();
     await session.page.getByRole('button', { name: 'Fold away for this visit' }).waitFor();
+    // The caution names the bank's energy: ½ · 50 µF · (400 V)² = 4 J, and grows above 10 J.
+    await expect(caution.textContent()).resolves.toMatch(/stores 4(\.00)? J/);
+    await session.page.getByRole('textbox', { name: 'Voltage', exact: true }).fill('5000');
+    await expect
+      .poll(() => caution.textContent())
+      .toMatch(/stores 625 J.*one touch can stop a heart/s);
+    await session.page.screenshot({ path: shot('e2e-pulse-bench-5kV-caution') });
   });
 
   it('the Alloy sheet gives skin depths at common test frequencies', async () => {

@@ -1,5 +1,6 @@
 import { awgDiameter } from '../../../shared/physics/awg';
 import { toMetres } from '../../../shared/units/length';
+import { wireProblem } from '../../components/length-field';
 import type { LengthEntry } from '../../lib/stack-drafts';
 import type { CompareRequest } from './worker/protocol';
 
@@ -23,7 +24,8 @@ export interface LabSettings {
       outerRadius: LengthEntry;
       length: LengthEntry;
       turns: number;
-      awg: number;
+      /** A gauge ('awg') or a bare diameter in a length unit. */
+      wire: LengthEntry;
     };
     gap: LengthEntry;
   };
@@ -40,7 +42,13 @@ export const defaultSettings: LabSettings = {
     capacitanceUF: 50,
     voltageV: 400,
     seriesResistanceOhm: 0.05,
-    coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100, awg: 26 },
+    coil: {
+      innerRadius: mm(5),
+      outerRadius: mm(12),
+      length: mm(10),
+      turns: 100,
+      wire: { value: 26, unit: 'awg' },
+    },
     gap: mm(0.5),
   },
 };
@@ -93,8 +101,8 @@ export function validateSettings(s: LabSettings): SettingsErrors {
     e['launch.coil.outerRadius'] = 'larger than the inner radius';
   if (!Number.isInteger(l.coil.turns) || l.coil.turns < 1)
     e['launch.coil.turns'] = 'a whole number, 1 or more';
-  if (!Number.isInteger(l.coil.awg) || l.coil.awg < -3 || l.coil.awg > 56)
-    e['launch.coil.awg'] = 'a gauge from -3 to 56';
+  const wire = wireProblem(l.coil.wire);
+  if (wire) e['launch.coil.wire'] = wire;
   return e;
 }
 
@@ -127,7 +135,10 @@ export function requestFromSettings(s: LabSettings): Omit<CompareRequest, 'blank
         outerRadiusM: m(s.launch.coil.outerRadius),
         lengthM: m(s.launch.coil.length),
         turns: s.launch.coil.turns,
-        wireDiameterM: awgDiameter(s.launch.coil.awg),
+        wireDiameterM:
+          s.launch.coil.wire.unit === 'awg'
+            ? awgDiameter(s.launch.coil.wire.value)
+            : m(s.launch.coil.wire),
         conductorSPerM: 58e6,
       },
       gapM: m(s.launch.gap),

@@ -29,6 +29,15 @@ export function UsageChart({ rows, from }: { rows: UsageRow[]; from: string }) {
     days.push(row);
   }
   const total = rows.reduce((s, r) => s + r.count, 0);
+  const byGroup = groups.map((g) => ({
+    group: g,
+    count: rows.filter((r) => r.routeGroup === g).reduce((s, r) => s + r.count, 0),
+  }));
+  const busiest = days.reduce<{ day: string; count: number } | null>((best, d) => {
+    const count = groups.reduce((s, g) => s + Number(d[g] ?? 0), 0);
+    return !best || count > best.count ? { day: String(d.day), count } : best;
+  }, null);
+  const summary = `${total} requests in all${byGroup.length ? `: ${byGroup.map((g) => `${g.group} ${g.count}`).join(', ')}` : ''}${busiest && busiest.count ? `; busiest day ${busiest.day} with ${busiest.count}` : ''}.`;
   return (
     <figure className="rounded-md border border-patina-100 bg-white p-3">
       <figcaption className="mb-2 text-sm font-semibold">
@@ -37,26 +46,70 @@ export function UsageChart({ rows, from }: { rows: UsageRow[]; from: string }) {
       {total === 0 ? (
         <p className="text-sm text-ink/70">No request has used your keys yet.</p>
       ) : (
-        <div role="img" aria-label="Bar chart of requests per day by route group" className="h-60">
-          <ResponsiveContainer width="100%" height="100%">
-            <BarChart data={days}>
-              <CartesianGrid stroke="#d5ebe6" />
-              <XAxis dataKey="day" interval={4} />
-              <YAxis allowDecimals={false} />
-              <Tooltip />
-              <Legend />
-              {groups.map((g, i) => (
-                <Bar
-                  key={g}
-                  dataKey={g}
-                  stackId="a"
-                  fill={seriesColours[i % seriesColours.length]}
-                  isAnimationActive={false}
-                />
-              ))}
-            </BarChart>
-          </ResponsiveContainer>
-        </div>
+        <>
+          <div
+            role="img"
+            aria-label={`Bar chart of requests per day by route group, last 30 days: ${summary}`}
+            className="h-60"
+          >
+            <ResponsiveContainer width="100%" height="100%">
+              <BarChart accessibilityLayer={false} data={days}>
+                <CartesianGrid stroke="#d5ebe6" />
+                <XAxis dataKey="day" interval={4} />
+                <YAxis allowDecimals={false} />
+                <Tooltip />
+                <Legend />
+                {groups.map((g, i) => (
+                  <Bar
+                    key={g}
+                    dataKey={g}
+                    stackId="a"
+                    fill={seriesColours[i % seriesColours.length]}
+                    isAnimationActive={false}
+                  />
+                ))}
+              </BarChart>
+            </ResponsiveContainer>
+          </div>
+          <details className="mt-2 text-sm">
+            <summary className="cursor-pointer text-patina-700">
+              The requests per day, as a table
+            </summary>
+            <div className="overflow-x-auto">
+              <table className="mt-1 w-full text-right tabular-nums">
+                <caption className="sr-only">Requests per day by route group, last 30 days</caption>
+                <thead>
+                  <tr>
+                    <th scope="col" className="pr-3 text-left">
+                      Day
+                    </th>
+                    {groups.map((g) => (
+                      <th key={g} scope="col" className="pr-3">
+                        {g}
+                      </th>
+                    ))}
+                  </tr>
+                </thead>
+                <tbody>
+                  {days
+                    .filter((d) => groups.some((g) => Number(d[g] ?? 0) > 0))
+                    .map((d) => (
+                      <tr key={String(d.day)}>
+                        <th scope="row" className="pr-3 text-left font-normal">
+                          {d.day}
+                        </th>
+                        {groups.map((g) => (
+                          <td key={g} className="pr-3">
+                            {d[g]}
+                          </td>
+                        ))}
+                      </tr>
+                    ))}
+                </tbody>
+              </table>
+            </div>
+          </details>
+        </>
       )}
     </figure>
   );

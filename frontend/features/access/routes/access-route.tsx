@@ -1,9 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Navigate } from 'react-router-dom';
 import type { z } from 'zod';
+import { ConfirmButton } from '../../../components/confirm-button';
+import { DataTable } from '../../../components/data-table';
 import { ProblemMessage } from '../../../components/problem-message';
+import { setFieldErrors, type FormFieldMap } from '../../../lib/field-errors';
 import { useMe } from '../../../lib/session';
 import { useKeyMutations, useMyKeys, useUsage, type NewKey } from '../api/keys';
 import { submitClass, TextField } from '../components/auth-form';
@@ -12,6 +14,12 @@ import { UsageChart } from '../components/usage-chart';
 import { newKeySchema } from '../schemas';
 
 const ranks = ['reader', 'integrator', 'curator', 'admin'] as const;
+type Values = z.infer<typeof newKeySchema>;
+/** Request fields the form shows itself (a refused role is named in the message below it). */
+const fields: FormFieldMap<Values> = {
+  name: { name: 'name', label: 'Name' },
+  expiresAt: { name: 'expiresInDays', label: 'Expires in (days)' },
+};
 /** An expiry this many days from now, computed when the form is sent. */
 function expiryIn(days: string): { expiresAt?: string } {
   return days ? { expiresAt: new Date(Date.now() + Number(days) * 86_400_000).toISOString() } : {};
@@ -31,12 +39,12 @@ export function AccessRoute() {
   const usage = useUsage();
   const { create, revoke, rotate } = useKeyMutations();
   const [shown, setShown] = useState<NewKey | null>(null);
-  const { register, handleSubmit, reset, formState } = useForm<z.infer<typeof newKeySchema>>({
+  const { register, handleSubmit, reset, formState, setError } = useForm<Values>({
     resolver: zodResolver(newKeySchema),
     defaultValues: { name: '', role: 'reader', expiresInDays: '90' },
   });
-  if (me.data === null) return <Navigate to="/sign-in" replace />;
-  if (!me.data) return <p>Loading…</p>;
+  // The router shows visitors the refused page (app/require-role.tsx); this waits for the answer.
+  if (!me.data) return <p role="status">Loading…</p>;
   const allowed = ranks.slice(0, ranks.indexOf(me.data.role) + 1);
 
   return (
@@ -64,7 +72,10 @@ export function AccessRoute() {
               role: v.role,
               ...expiryIn(v.expiresInDays),
             },
-            { onSuccess: (k) => (setShown(k), reset()) },
+            {
+              onSuccess: (k) => (setShown(k), reset()),
+              onError: (e) => setFieldErrors(e, setError, fields),
+            },
           ),
         )}
       >
@@ -96,7 +107,9 @@ export function AccessRoute() {
         <button type="submit" className={submitClass} disabled={create.isPending}>
           Create the key
         </button>
-        {create.isError ? <ProblemMessage error={create.error} /> : null}
+        {create.isError ? (
+          <ProblemMessage error={create.error} title="No key created" fields={fields} />
+        ) : null}
       </form>
 
       <section aria-labelledby="keys-title" className="flex flex-col gap-2">
@@ -104,62 +117,68 @@ export function AccessRoute() {
           Your keys
         </h2>
         {keys.isError ? <ProblemMessage error={keys.error} /> : null}
-        <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-          <table className="w-full min-w-[44rem] text-sm">
-            <caption className="sr-only">Your API keys</caption>
-            <thead className="bg-patina-50 text-left">
-              <tr>
-                {['Name', 'Prefix', 'Role', 'Created', 'Last used', 'Expires', 'State', ''].map(
-                  (h) => (
-                    <th key={h} scope="col" className="px-3 py-2">
-                      {h}
-                    </th>
-                  ),
-                )}
-              </tr>
-            </thead>
-            <tbody>
-              {keys.data?.items.length === 0 ? (
-                <tr>
-                  <td colSpan={8} className="px-3 py-3 text-ink/70">
-                    No keys yet.
-                  </td>
-                </tr>
-              ) : null}
-              {keys.data?.items.map((k) => (
-                <tr key={k.id} className="border-t border-patina-50">
-                  <td className="px-3 py-1.5 font-medium">{k.name}</td>
-                  <td className="px-3 py-1.5 font-mono text-xs">cdy_{k.prefix}_…</td>
-                  <td className="px-3 py-1.5">{k.role}</td>
-                  <td className="px-3 py-1.5">{when(k.createdAt)}</td>
-                  <td className="px-3 py-1.5">{when(k.lastUsedAt)}</td>
-                  <td className="px-3 py-1.5">{when(k.expiresAt)}</td>
-                  <td className="px-3 py-1.5">{keyState(k)}</td>
-                  <td className="flex gap-2 px-3 py-1.5">
-                    {keyState(k) === 'live' ? (
-                      <>
-                        <button
-                          type="button"
-                          className="underline"
-                          onClick={() => rotate.mutate(k.id, { onSuccess: setShown })}
-                        >
-                          Rotate
-                        </button>
-                        <button
-                          type="button"
-                          className="text-copper-700 underline"
-                          onClick={() => revoke.mutate(k.id)}
-                        >
-                          Revoke
-                        </button>
-                      </>
-                    ) : null}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable
+          caption="Your API keys"
+          headers={[
+            'Name',
+            'Prefix',
+            'Role',
+            'Created',
+            'Last used',
+            'Expires',
+            'State',
+            { label: 'Actions', visuallyHidden: true },
+          ]}
+          minWidth="44rem"
+        >
+          {keys.data?.items.length === 0 ? (
+            <tr>
+              <td colSpan={8} className="px-3 py-3 text-ink/70">
+                No keys yet.
+              </td>
+            </tr>
+          ) : null}
+          {keys.data?.items.map((k) => (
+            <tr key={k.id} className="border-t border-patina-50">
+              <td className="px-3 py-1.5 font-medium">{k.name}</td>
+              <td className="px-3 py-1.5 font-mono text-xs">cdy_{k.prefix}_…</td>
+              <td className="px-3 py-1.5">{k.role}</td>
+              <td className="px-3 py-1.5">{when(k.createdAt)}</td>
+              <td className="px-3 py-1.5">{when(k.lastUsedAt)}</td>
+              <td className="px-3 py-1.5">{when(k.expiresAt)}</td>
+              <td className="px-3 py-1.5">{keyState(k)}</td>
+              <td className="px-3 py-1.5">
+                {keyState(k) === 'live' ? (
+                  <span className="flex flex-wrap gap-3">
+                    <button
+                      type="button"
+                      className="underline"
+                      onClick={() => rotate.mutate(k.id, { onSuccess: setShown })}
+                    >
+                      Rotate <span className="sr-only">{k.name}</span>
+                    </button>
+                    <ConfirmButton
+                      className="text-copper-700 underline"
+                      title={`Revoke the key “${k.name}”?`}
+                      description={
+                        <p>
+                          Every tool that sends it is refused from now on; this cannot be undone. To
+                          replace a key without a gap, rotate it instead.
+                        </p>
+                      }
+                      confirmLabel="Revoke the key"
+                      onConfirm={() => revoke.mutate(k.id)}
+                    >
+                      Revoke <span className="sr-only">{k.name}</span>
+                    </ConfirmButton>
+                  </span>
+                ) : null}
+              </td>
+            </tr>
+          ))}
+        </DataTable>
+        {revoke.isError ? <ProblemMessage error={revoke.error} title="Not revoked" /> : null}
+        {rotate.isError ? <ProblemMessage error={rotate.error} title="Not rotated" /> : null}
       </section>
 
       {usage.data ? <UsageChart rows={usage.data.items} from={usage.data.from} /> : null}

@@ -4,13 +4,23 @@ import { useForm } from 'react-hook-form';
 import { Link, useSearchParams } from 'react-router-dom';
 import type { z } from 'zod';
 import { ProblemMessage } from '../../../components/problem-message';
+import { setFieldErrors, type FormFieldMap } from '../../../lib/field-errors';
 import { requestReset, resetPassword } from '../api/auth';
 import { AuthFrame, submitClass, TextField } from '../components/auth-form';
 import { resetRequestSchema, resetSchema } from '../schemas';
 
+const requestFields: FormFieldMap<z.infer<typeof resetRequestSchema>> = {
+  email: { name: 'email', label: 'E-mail' },
+};
+const resetFields: FormFieldMap<z.infer<typeof resetSchema>> = {
+  password: { name: 'password', label: 'New password' },
+};
+
 function RequestForm() {
   const mutation = useMutation({ mutationFn: (v: { email: string }) => requestReset(v.email) });
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof resetRequestSchema>>({
+  const { register, handleSubmit, formState, setError } = useForm<
+    z.infer<typeof resetRequestSchema>
+  >({
     resolver: zodResolver(resetRequestSchema),
   });
   if (mutation.isSuccess) return <p role="status">{mutation.data.detail}</p>;
@@ -18,7 +28,9 @@ function RequestForm() {
     <form
       noValidate
       className="flex flex-col gap-3"
-      onSubmit={handleSubmit((v) => mutation.mutate(v))}
+      onSubmit={handleSubmit((v) =>
+        mutation.mutate(v, { onError: (e) => setFieldErrors(e, setError, requestFields) }),
+      )}
     >
       <TextField
         id="email"
@@ -28,7 +40,9 @@ function RequestForm() {
         error={formState.errors.email}
         registration={register('email')}
       />
-      {mutation.isError ? <ProblemMessage error={mutation.error} /> : null}
+      {mutation.isError ? (
+        <ProblemMessage error={mutation.error} title="No link sent" fields={requestFields} />
+      ) : null}
       <button type="submit" className={submitClass} disabled={mutation.isPending}>
         Mail me a reset link
       </button>
@@ -40,7 +54,7 @@ function NewPasswordForm({ token }: { token: string }) {
   const mutation = useMutation({
     mutationFn: (v: { password: string }) => resetPassword(token, v.password),
   });
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof resetSchema>>({
+  const { register, handleSubmit, formState, setError } = useForm<z.infer<typeof resetSchema>>({
     resolver: zodResolver(resetSchema),
   });
   if (mutation.isSuccess) {
@@ -57,7 +71,9 @@ function NewPasswordForm({ token }: { token: string }) {
     <form
       noValidate
       className="flex flex-col gap-3"
-      onSubmit={handleSubmit((v) => mutation.mutate(v))}
+      onSubmit={handleSubmit((v) =>
+        mutation.mutate(v, { onError: (e) => setFieldErrors(e, setError, resetFields) }),
+      )}
     >
       <TextField
         id="password"
@@ -67,7 +83,9 @@ function NewPasswordForm({ token }: { token: string }) {
         error={formState.errors.password}
         registration={register('password')}
       />
-      {mutation.isError ? <ProblemMessage error={mutation.error} /> : null}
+      {mutation.isError ? (
+        <ProblemMessage error={mutation.error} title="Not changed" fields={resetFields} />
+      ) : null}
       <button type="submit" className={submitClass} disabled={mutation.isPending}>
         Set the new password
       </button>

@@ -1,18 +1,29 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import type { z } from 'zod';
 import { ProblemMessage } from '../../../components/problem-message';
+import { setFieldErrors, type FormFieldMap } from '../../../lib/field-errors';
+import { safeReturnPath } from '../../../lib/session';
 import { useSavedStacks } from '../../../lib/stack-drafts';
 import { useSignIn } from '../api/auth';
 import { AuthFrame, submitClass, TextField } from '../components/auth-form';
 import { signInSchema } from '../schemas';
 
+type Values = z.infer<typeof signInSchema>;
+const fields: FormFieldMap<Values> = {
+  email: { name: 'email', label: 'E-mail' },
+  password: { name: 'password', label: 'Password' },
+};
+
 export function SignInRoute() {
   const navigate = useNavigate();
+  const [params] = useSearchParams();
+  // Back to where the person was (a path on this site only); Access when they came here directly.
+  const next = safeReturnPath(params.get('next')) ?? '/access';
   const [saved] = useSavedStacks();
   const signIn = useSignIn(() => saved);
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof signInSchema>>({
+  const { register, handleSubmit, formState, setError } = useForm<Values>({
     resolver: zodResolver(signInSchema),
   });
   return (
@@ -32,7 +43,12 @@ export function SignInRoute() {
       <form
         noValidate
         className="flex flex-col gap-3"
-        onSubmit={handleSubmit((v) => signIn.mutate(v, { onSuccess: () => navigate('/access') }))}
+        onSubmit={handleSubmit((v) =>
+          signIn.mutate(v, {
+            onSuccess: () => navigate(next, { replace: true }),
+            onError: (e) => setFieldErrors(e, setError, fields),
+          }),
+        )}
       >
         <TextField
           id="email"
@@ -50,7 +66,9 @@ export function SignInRoute() {
           error={formState.errors.password}
           registration={register('password')}
         />
-        {signIn.isError ? <ProblemMessage error={signIn.error} title="Not signed in" /> : null}
+        {signIn.isError ? (
+          <ProblemMessage error={signIn.error} title="Not signed in" fields={fields} />
+        ) : null}
         <button type="submit" className={submitClass} disabled={signIn.isPending}>
           {signIn.isPending ? 'Signing in…' : 'Sign in'}
         </button>

@@ -4,13 +4,21 @@ import { useForm } from 'react-hook-form';
 import { Link } from 'react-router-dom';
 import type { z } from 'zod';
 import { ProblemMessage } from '../../../components/problem-message';
+import { setFieldErrors, type FormFieldMap } from '../../../lib/field-errors';
 import { signUp } from '../api/auth';
 import { AuthFrame, submitClass, TextField } from '../components/auth-form';
 import { signUpSchema } from '../schemas';
 
+type Values = z.infer<typeof signUpSchema>;
+const fields: FormFieldMap<Values> = {
+  name: { name: 'name', label: 'Name' },
+  email: { name: 'email', label: 'E-mail' },
+  password: { name: 'password', label: 'Password' },
+};
+
 export function SignUpRoute() {
   const mutation = useMutation({ mutationFn: signUp });
-  const { register, handleSubmit, formState } = useForm<z.infer<typeof signUpSchema>>({
+  const { register, handleSubmit, formState, setError } = useForm<Values>({
     resolver: zodResolver(signUpSchema),
   });
   if (mutation.isSuccess) {
@@ -32,7 +40,9 @@ export function SignUpRoute() {
       <form
         noValidate
         className="flex flex-col gap-3"
-        onSubmit={handleSubmit((v) => mutation.mutate(v))}
+        onSubmit={handleSubmit((v) =>
+          mutation.mutate(v, { onError: (e) => setFieldErrors(e, setError, fields) }),
+        )}
       >
         <TextField
           id="name"
@@ -57,7 +67,9 @@ export function SignUpRoute() {
           error={formState.errors.password}
           registration={register('password')}
         />
-        {mutation.isError ? <ProblemMessage error={mutation.error} title="Not signed up" /> : null}
+        {mutation.isError ? (
+          <ProblemMessage error={mutation.error} title="Not signed up" fields={fields} />
+        ) : null}
         <button type="submit" className={submitClass} disabled={mutation.isPending}>
           {mutation.isPending ? 'Sending…' : 'Create the account'}
         </button>

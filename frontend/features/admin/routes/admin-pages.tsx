@@ -1,3 +1,4 @@
+import { ConfirmButton } from '../../../components/confirm-button';
 import { DataTable } from '../../../components/data-table';
 import { ProblemMessage } from '../../../components/problem-message';
 import { useAdminMutations, useAllKeys, useAudit, useOutbox, useUsers } from '../api/admin';
@@ -14,7 +15,14 @@ export function UsersPage() {
       {updateUser.isError ? <ProblemMessage error={updateUser.error} /> : null}
       <DataTable
         caption="People with an account"
-        headers={['Name', 'E-mail', 'Role', 'Confirmed', 'State', '']}
+        headers={[
+          'Name',
+          'E-mail',
+          'Role',
+          'Confirmed',
+          'State',
+          { label: 'Actions', visuallyHidden: true },
+        ]}
         minWidth="40rem"
       >
         {users.data?.items.map((u) => (
@@ -38,18 +46,30 @@ export function UsersPage() {
             <td className={td}>{u.emailVerified ? 'yes' : 'no'}</td>
             <td className={td}>{u.status}</td>
             <td className={td}>
-              <button
-                type="button"
-                className="underline"
-                onClick={() =>
-                  updateUser.mutate({
-                    id: u.id,
-                    status: u.status === 'active' ? 'disabled' : 'active',
-                  })
-                }
-              >
-                {u.status === 'active' ? 'Disable' : 'Enable'}
-              </button>
+              {u.status === 'active' ? (
+                <ConfirmButton
+                  className="text-copper-700 underline"
+                  title={`Disable ${u.name} (${u.email})?`}
+                  description={
+                    <p>
+                      Their sessions end at once and they cannot sign in until an admin enables them
+                      again. Their API keys are refused while the account is disabled.
+                    </p>
+                  }
+                  confirmLabel="Disable the account"
+                  onConfirm={() => updateUser.mutate({ id: u.id, status: 'disabled' })}
+                >
+                  Disable <span className="sr-only">{u.email}</span>
+                </ConfirmButton>
+              ) : (
+                <button
+                  type="button"
+                  className="underline"
+                  onClick={() => updateUser.mutate({ id: u.id, status: 'active' })}
+                >
+                  Enable <span className="sr-only">{u.email}</span>
+                </button>
+              )}
             </td>
           </tr>
         ))}
@@ -64,9 +84,19 @@ export function KeysPage() {
   return (
     <>
       {keys.isError ? <ProblemMessage error={keys.error} /> : null}
+      {revokeKey.isError ? <ProblemMessage error={revokeKey.error} title="Not revoked" /> : null}
       <DataTable
         caption="Every API key"
-        headers={['Owner', 'Name', 'Prefix', 'Role', 'Last used', 'Expires', 'Revoked', '']}
+        headers={[
+          'Owner',
+          'Name',
+          'Prefix',
+          'Role',
+          'Last used',
+          'Expires',
+          'Revoked',
+          { label: 'Actions', visuallyHidden: true },
+        ]}
         minWidth="44rem"
       >
         {keys.data?.items.map((k) => (
@@ -80,13 +110,20 @@ export function KeysPage() {
             <td className={td}>{when(k.revokedAt)}</td>
             <td className={td}>
               {k.revokedAt ? null : (
-                <button
-                  type="button"
+                <ConfirmButton
                   className="text-copper-700 underline"
-                  onClick={() => revokeKey.mutate(k.id)}
+                  title={`Revoke the key “${k.name}” of owner #${k.ownerId}?`}
+                  description={
+                    <p>
+                      Every tool that sends it is refused from now on; this cannot be undone. Its
+                      owner can make a new one on Access.
+                    </p>
+                  }
+                  confirmLabel="Revoke the key"
+                  onConfirm={() => revokeKey.mutate(k.id)}
                 >
-                  Revoke
-                </button>
+                  Revoke <span className="sr-only">{k.name}</span>
+                </ConfirmButton>
               )}
             </td>
           </tr>

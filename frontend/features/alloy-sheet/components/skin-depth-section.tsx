@@ -8,7 +8,8 @@ import {
   YAxis,
 } from 'recharts';
 import { skinDepth } from '../../../../shared/physics/skin-depth';
-import { decadeTicks, formatHertz, formatMetres } from '../../../lib/chart-format';
+import { decadeTicks, formatHertz, formatMetres, tickNumber } from '../../../lib/chart-format';
+import { formatNumber } from '../../../lib/format';
 
 /** Frequencies eddy-current sorters and conductivity meters commonly work at (common practice, no source). */
 const TEST_FREQUENCIES = [1e3, 10e3, 60e3, 100e3, 500e3, 1e6, 5e6];
@@ -68,11 +69,15 @@ export function SkinDepthSection({
         <figure className="rounded-md border border-patina-100 bg-white p-3">
           <div
             role="img"
-            aria-label="Chart of standard depth of penetration against frequency"
+            aria-label={`Chart of standard depth of penetration against frequency, 100 Hz to 10 MHz: from ${formatMetres(curve[0]!.depthMm / 1e3)} down to ${formatMetres(curve.at(-1)!.depthMm / 1e3)}; the table beside it lists the values at the common test frequencies`}
             className="h-64"
           >
             <ResponsiveContainer width="100%" height="100%">
-              <LineChart data={curve} margin={{ top: 8, right: 16, bottom: 20, left: 8 }}>
+              <LineChart
+                accessibilityLayer={false}
+                data={curve}
+                margin={{ top: 8, right: 16, bottom: 20, left: 8 }}
+              >
                 <CartesianGrid stroke="#d5ebe6" />
                 <XAxis
                   dataKey="f"
@@ -88,12 +93,12 @@ export function SkinDepthSection({
                   type="number"
                   scale="log"
                   domain={['auto', 'auto']}
-                  tickFormatter={(v) => Number(v).toPrecision(2)}
+                  tickFormatter={tickNumber}
                   label={{ value: 'δ (mm)', angle: -90, position: 'insideLeft' }}
                 />
                 <Tooltip
                   labelFormatter={(f) => formatHertz(Number(f))}
-                  formatter={(v) => `${Number(v).toPrecision(3)} mm`}
+                  formatter={(v) => `${formatNumber(Number(v))} mm`}
                 />
                 <Line
                   dataKey="depthMm"

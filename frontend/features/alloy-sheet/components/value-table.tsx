@@ -1,20 +1,26 @@
 import { FromMemoryBadge } from '../../../components/badges';
 import type { PropertyValue } from '../../../lib/api-types';
 import {
-  formatConductivity,
-  formatConductivityRange,
-  formatDensity,
+  conductivityQuantityName,
   formatEditable,
-  formatNumber,
+  formatQuantityRange,
+  formatQuantityValue,
 } from '../../../lib/format';
 import type { UnitPreferences } from '../../../lib/unit-preferences';
 
-const quantityLabels: Record<PropertyValue['quantity'], string> = {
-  conductivity: 'Electrical conductivity',
-  density: 'Density',
-  resistivity_temperature_coefficient: 'Temperature coefficient of resistivity',
-  relative_permeability: 'Relative permeability (low field)',
-};
+/** Row names; conductivity is named resistivity when it is read in a resistivity unit. */
+function quantityLabel(quantity: PropertyValue['quantity'], units: UnitPreferences): string {
+  switch (quantity) {
+    case 'conductivity':
+      return `Electrical ${conductivityQuantityName(units.conductivity).toLowerCase()}`;
+    case 'density':
+      return 'Density';
+    case 'resistivity_temperature_coefficient':
+      return 'Temperature coefficient of resistivity';
+    default:
+      return 'Relative permeability (low field)';
+  }
+}
 
 const sourceKindLabels: Record<string, string> = {
   handbook: 'handbook',
@@ -29,37 +35,16 @@ function describe(
   value: PropertyValue,
   units: UnitPreferences,
 ): { nominal: string; range: string } {
-  const hasRange = value.min !== null && value.max !== null;
-  switch (value.quantity) {
-    case 'conductivity':
-      return {
-        nominal: formatConductivity(value.nominal, units.conductivity),
-        range: hasRange ? formatConductivityRange(value.min!, value.max!, units.conductivity) : '—',
-      };
-    case 'density':
-      return {
-        nominal: formatDensity(value.nominal, units.density),
-        range: hasRange
-          ? `${formatDensity(value.min!, units.density)} – ${formatDensity(value.max!, units.density)}`
-          : '—',
-      };
-    case 'resistivity_temperature_coefficient':
-      return {
-        nominal: `${formatNumber(value.nominal)} /K`,
-        range: hasRange ? `${formatNumber(value.min!)}–${formatNumber(value.max!)} /K` : '—',
-      };
-    default:
-      return {
-        nominal: formatNumber(value.nominal),
-        range: hasRange ? `${formatNumber(value.min!)}–${formatNumber(value.max!)}` : '—',
-      };
-  }
+  return {
+    nominal: formatQuantityValue(value.quantity, value.nominal, units),
+    range: formatQuantityRange(value.quantity, value.min, value.max, units),
+  };
 }
 
 export function ValueTable({ values, units }: { values: PropertyValue[]; units: UnitPreferences }) {
   return (
     <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-      <table className="w-full min-w-[40rem] border-collapse text-sm">
+      <table className="stack-table w-full border-collapse text-sm sm:min-w-[40rem]">
         <caption className="sr-only">Every value on record for this alloy, with its source</caption>
         <thead className="bg-patina-50 text-left">
           <tr>
@@ -86,13 +71,17 @@ export function ValueTable({ values, units }: { values: PropertyValue[]; units: 
             return (
               <tr key={v.quantity} className="border-t border-patina-50 align-top">
                 <th scope="row" className="px-3 py-2 text-left font-medium">
-                  {quantityLabels[v.quantity]}
+                  {quantityLabel(v.quantity, units)}
                   {v.condition ? (
                     <span className="block text-xs font-normal text-ink/60">{v.condition}</span>
                   ) : null}
                 </th>
-                <td className="px-3 py-2 text-right tabular-nums">{shown.nominal}</td>
-                <td className="px-3 py-2 text-right tabular-nums">{shown.range}</td>
+                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums">
+                  {shown.nominal}
+                </td>
+                <td className="px-3 py-2 text-right whitespace-nowrap tabular-nums">
+                  {shown.range}
+                </td>
                 <td className="px-3 py-2 whitespace-nowrap">
                   {formatEditable(v.referenceTemperatureK - 273.15)} °C
                 </td>

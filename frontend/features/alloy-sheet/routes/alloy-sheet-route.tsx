@@ -3,12 +3,16 @@ import { Link, useParams } from 'react-router-dom';
 import { FromMemoryBadge, MagneticBadge } from '../../../components/badges';
 import { NominalCaution } from '../../../components/nominal-caution';
 import { UnitSwitcher } from '../../../components/unit-switcher';
+import { isResistivityUnit } from '../../../../shared/units/conductivity';
 import {
+  conductivityOverDensityName,
+  conductivityQuantityName,
   familyLabels,
   formatConductivity,
+  formatConductivityOverDensity,
   formatDensity,
   formatEditable,
-  formatNumber,
+  formatFrequency,
 } from '../../../lib/format';
 import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { useAlloy } from '../api/get-alloy';
@@ -19,9 +23,11 @@ import { useMe } from '../../../lib/session';
 import { ValueTable } from '../components/value-table';
 
 function Figure({ label, value }: { label: string; value: string }) {
+  // Capitals would turn σ/ρ into "Σ/Ρ", which reads as S/P: Greek labels keep their case.
+  const greek = /[α-ω]/.test(label);
   return (
     <div className="rounded-md border border-patina-100 bg-white px-4 py-3">
-      <dt className="text-xs uppercase tracking-wide text-ink/60">{label}</dt>
+      <dt className={`text-xs tracking-wide text-ink/60 ${greek ? '' : 'uppercase'}`}>{label}</dt>
       <dd className="text-lg font-semibold tabular-nums">{value}</dd>
     </div>
   );
@@ -35,7 +41,7 @@ export function AlloySheetRoute() {
   return (
     <article aria-labelledby="alloy-title" className="flex flex-col gap-5">
       <nav aria-label="Breadcrumb" className="text-sm">
-        <Link to="/" className="text-patina-700 hover:underline">
+        <Link to="/" className="text-patina-700 underline">
           Catalogue
         </Link>{' '}
         / {alloy.name}
@@ -63,16 +69,29 @@ export function AlloySheetRoute() {
       </header>
 
       <dl className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        {/* Conductivity and resistivity both, each in the chosen unit when it is of its kind. */}
         <Figure
           label="Conductivity"
-          value={formatConductivity(alloy.conductivitySPerM, units.conductivity)}
+          value={formatConductivity(
+            alloy.conductivitySPerM,
+            isResistivityUnit(units.conductivity) ? '%IACS' : units.conductivity,
+          )}
         />
-        <Figure label="%IACS" value={formatNumber(alloy.conductivityPercentIacs)} />
         <Figure
           label="Resistivity"
-          value={formatConductivity(alloy.conductivitySPerM, 'uohm_cm')}
+          value={formatConductivity(
+            alloy.conductivitySPerM,
+            isResistivityUnit(units.conductivity) ? units.conductivity : 'uohm_cm',
+          )}
         />
         <Figure label="Density" value={formatDensity(alloy.densityKgPerM3, units.density)} />
+        <Figure
+          label={conductivityOverDensityName}
+          value={formatConductivityOverDensity(
+            alloy.conductivitySPerM / alloy.densityKgPerM3,
+            units,
+          )}
+        />
       </dl>
 
       {alloy.notes ? <p className="rounded-md bg-patina-50 p-3 text-sm">{alloy.notes}</p> : null}
@@ -94,7 +113,7 @@ export function AlloySheetRoute() {
                 Measured conductivities from imported measurement sets
               "
             headers={[
-              'Measured',
+              `Measured ${conductivityQuantityName(units.conductivity).toLowerCase()}`,
               'Handbook',
               'At',
               'Uncertainty',
@@ -113,8 +132,7 @@ export function AlloySheetRoute() {
                   {formatConductivity(alloy.conductivitySPerM, units.conductivity)}
                 </td>
                 <td className="px-3 py-1.5">
-                  {formatNumber(m.frequencyHz / 1e3)} kHz, {formatEditable(m.temperatureK - 273.15)}{' '}
-                  °C
+                  {formatFrequency(m.frequencyHz)}, {formatEditable(m.temperatureK - 273.15)} °C
                 </td>
                 <td className="px-3 py-1.5">{formatEditable(m.uncertaintyPercent)} %</td>
                 <td className="px-3 py-1.5">{m.sample}</td>
@@ -153,9 +171,9 @@ export function AlloySheetRoute() {
           Mass per cent; the balance and trace elements as the standard for the alloy allows.
         </p>
       </section>
-      <HistorySection slug={alloy.slug} />
+      <HistorySection slug={alloy.slug} units={units} />
       {me.data && (me.data.role === 'curator' || me.data.role === 'admin') ? (
-        <ProposeChange alloy={alloy} />
+        <ProposeChange alloy={alloy} units={units} />
       ) : null}
       <NominalCaution />
     </article>

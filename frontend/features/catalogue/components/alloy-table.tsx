@@ -94,7 +94,8 @@ export function AlloyTable({ rows, sort, onSortChange, units }: AlloyTableProps)
 
   return (
     <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-      <table className="w-full min-w-[44rem] border-collapse text-sm">
+      {/* Below 40rem the rows become cards (styles.css, .stack-table) and the sort buttons a row. */}
+      <table className="stack-table stack-table-sortable w-full border-collapse text-sm sm:min-w-[44rem]">
         <caption className="sr-only">Alloys matching the search, sortable by column</caption>
         <thead className="bg-patina-50 text-left">
           {table.getHeaderGroups().map((group) => (
@@ -113,12 +114,12 @@ export function AlloyTable({ rows, sort, onSortChange, units }: AlloyTableProps)
                           ? 'descending'
                           : 'none'
                     }
-                    className={`border-b border-patina-100 px-3 py-2 font-semibold ${numeric ? 'text-right' : ''}`}
+                    className={`border-b border-patina-100 px-3 py-2 font-semibold ${numeric ? 'text-right' : ''} ${header.column.getCanSort() ? '' : 'max-sm:hidden'}`}
                   >
                     {header.column.getCanSort() ? (
                       <button
                         type="button"
-                        className="inline-flex items-center gap-1 hover:text-patina-700"
+                        className="inline-flex items-center gap-1 hover:text-patina-700 max-sm:rounded max-sm:border max-sm:border-patina-300 max-sm:bg-white max-sm:px-2 max-sm:py-0.5 max-sm:text-xs"
                         onClick={header.column.getToggleSortingHandler()}
                       >
                         <table.FlexRender header={header} />
@@ -141,6 +142,10 @@ export function AlloyTable({ rows, sort, onSortChange, units }: AlloyTableProps)
               {row.getAllCells().map((cell) => (
                 <td
                   key={cell.id}
+                  // On a phone each cell reads "label: value"; the alloy's name heads the card.
+                  data-label={
+                    cell.column.id === 'name' ? '' : String(cell.column.columnDef.header ?? '')
+                  }
                   className={`px-3 py-2 ${cell.column.id === 'conductivity' || cell.column.id === 'density' ? 'text-right tabular-nums' : ''}`}
                 >
                   <table.FlexRender cell={cell} />

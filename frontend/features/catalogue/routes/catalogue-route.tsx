@@ -15,6 +15,10 @@ import {
   type CatalogueFilters,
 } from '../filters';
 import { rangesInUnits } from '../unit-change';
+import { useDebouncedValue } from '../use-debounced-value';
+
+/** Typing pause before the table is searched: about one request per word, not per letter. */
+const SEARCH_DELAY_MS = 250;
 
 export function CatalogueRoute() {
   const [params, setParams] = useSearchParams();
@@ -25,7 +29,11 @@ export function CatalogueRoute() {
     filters.cmin || filters.cmax || filters.dmin || filters.dmax
       ? filters
       : { ...filters, cunit: units.conductivity, dunit: units.density };
-  const list = useAlloyList(apiQueryFromFilters(withUnits));
+  // The box and the URL follow each keystroke; the request waits for a pause in typing, and a
+  // request overtaken by a newer one is aborted (TanStack Query's signal reaches fetch).
+  const q = useDebouncedValue(filters.q, SEARCH_DELAY_MS);
+  const list = useAlloyList(apiQueryFromFilters({ ...withUnits, q }));
+  const updating = list.isFetching || q !== filters.q;
   const searchBox = useRef<HTMLInputElement>(null);
 
   const update = (next: Partial<CatalogueFilters>) => {
@@ -58,7 +66,7 @@ export function CatalogueRoute() {
             Catalogue
           </h1>
           <p className="text-sm text-ink/70">
-            Every value cited; search by name, UNS number, family or element.
+            Every value cited; search by name, trade name, UNS number, family or element.
           </p>
         </div>
         <UnitSwitcher
@@ -98,7 +106,7 @@ export function CatalogueRoute() {
           : data
             ? data.total === 0
               ? null
-              : `${first}–${last} of ${data.total} alloys${list.isFetching ? ' (updating…)' : ''}`
+              : `${first}–${last} of ${data.total} ${data.total === 1 ? 'alloy' : 'alloys'}${updating ? ' (updating…)' : ''}`
             : 'Loading the table…'}
       </div>
 

@@ -9,31 +9,91 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import { percentIacs } from '../../../../shared/units/conductivity';
-import { decadeTicks, formatHertz, seriesColours } from '../../../lib/chart-format';
+import { unitLabel } from '../../../../shared/units/codes';
+import {
+  decadeTicks,
+  domainIncluding,
+  formatHertz,
+  seriesColours,
+  tickNumber,
+} from '../../../lib/chart-format';
+import {
+  conductivityIn,
+  conductivityQuantityName,
+  formatConductivity,
+  formatNumber,
+} from '../../../lib/format';
+import type { UnitPreferences } from '../../../lib/unit-preferences';
 import type { BlankResult } from '../worker/protocol';
 
+/** Frequencies for the text alternative: the decades of the sweep, nearest point to each. */
+function samplePoints(results: BlankResult[]): number[] {
+  const frequencies = results[0]?.points.map((p) => p.frequencyHz) ?? [];
+  if (!frequencies.length) return [];
+  const wanted = decadeTicks(frequencies[0]!, frequencies.at(-1)!);
+  const picks = new Set<number>([0, frequencies.length - 1]);
+  for (const f of wanted) {
+    let best = 0;
+    frequencies.forEach((g, i) => {
+      if (Math.abs(Math.log(g / f)) < Math.abs(Math.log(frequencies[best]! / f))) best = i;
+    });
+    picks.add(best);
+  }
+  return [...picks].sort((a, b) => a - b);
+}
+
 /** Apparent conductivity against frequency, one line per blank, with its limits dashed. */
-export function ApparentConductivityChart({ results }: { results: BlankResult[] }) {
+export function ApparentConductivityChart({
+  results,
+  units,
+}: {
+  results: BlankResult[];
+  units: UnitPreferences;
+}) {
+  const unit = units.conductivity;
+  const label = unitLabel(unit);
+  const quantity = `apparent ${conductivityQuantityName(unit).toLowerCase()}`;
+  const y = (sPerM: number) => conductivityIn(sPerM, unit);
   const frequencies = results[0]?.points.map((p) => p.frequencyHz) ?? [];
   const rows = frequencies.map((f, i) => {
     const row: Record<string, number> = { f };
-    for (const r of results) row[r.id] = percentIacs(r.points[i]!.apparentConductivitySPerM);
+    for (const r of results) row[r.id] = y(r.points[i]!.apparentConductivitySPerM);
     return row;
   });
   const ticks = decadeTicks(frequencies[0] ?? 1, frequencies.at(-1) ?? 10);
+  // The axis holds every curve and every limit line drawn on it (issue 9, item 7).
+  const limits = results.flatMap((r) => [
+    ...(r.limits.thicknessWeightedMeanSPerM !== null ? [r.limits.thicknessWeightedMeanSPerM] : []),
+    r.limits.surfaceLayerSPerM,
+  ]);
+  const domain = domainIncluding(
+    [
+      ...results.flatMap((r) => r.points.map((p) => y(p.apparentConductivitySPerM))),
+      ...limits.map(y),
+    ],
+    { floorZero: true },
+  );
+  const samples = samplePoints(results);
+  const title = `${quantity[0]!.toUpperCase()}${quantity.slice(1)} against frequency`;
   return (
-    <figure className="rounded-md border border-patina-100 bg-white p-3">
-      <figcaption className="mb-2 text-sm font-semibold">
-        Apparent conductivity against frequency
+    <figure
+      className="rounded-md border border-patina-100 bg-white p-3"
+      aria-labelledby="apparent-chart-title"
+    >
+      <figcaption id="apparent-chart-title" className="mb-2 text-sm font-semibold">
+        {title} ({label})
       </figcaption>
       <div
         role="img"
-        aria-label="Chart of apparent conductivity in %IACS against frequency for each blank"
+        aria-label={`Chart of ${quantity} in ${label} against frequency for ${results.map((r) => r.name).join(' and ')}; the table below the chart lists the figures`}
         className="h-80"
       >
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={rows} margin={{ top: 8, right: 16, bottom: 20, left: 8 }}>
+          <LineChart
+            accessibilityLayer={false}
+            data={rows}
+            margin={{ top: 8, right: 16, bottom: 20, left: 16 }}
+          >
             <CartesianGrid stroke="#d5ebe6" />
             <XAxis
               dataKey="f"
@@ -45,12 +105,14 @@ export function ApparentConductivityChart({ results }: { results: BlankResult[] 
               label={{ value: 'frequency', position: 'insideBottom', offset: -12 }}
             />
             <YAxis
-              label={{ value: '%IACS', angle: -90, position: 'insideLeft' }}
-              domain={[0, 'auto']}
+              label={{ value: label, angle: -90, position: 'insideLeft', offset: -8 }}
+              domain={domain}
+              allowDataOverflow={false}
+              tickFormatter={tickNumber}
             />
             <Tooltip
               labelFormatter={(f) => formatHertz(Number(f))}
-              formatter={(v) => `${Number(v).toFixed(2)} %IACS`}
+              formatter={(v) => `${formatNumber(Number(v))} ${label}`}
             />
             <Legend verticalAlign="top" />
             {results.map((r, i) => (
@@ -68,7 +130,7 @@ export function ApparentConductivityChart({ results }: { results: BlankResult[] 
               r.limits.thicknessWeightedMeanSPerM !== null ? (
                 <ReferenceLine
                   key={`${r.id}-mean`}
-                  y={percentIacs(r.limits.thicknessWeightedMeanSPerM)}
+                  y={y(r.limits.thicknessWeightedMeanSPerM)}
                   stroke={seriesColours[i]}
                   strokeDasharray="6 4"
                 />
@@ -76,7 +138,7 @@ export function ApparentConductivityChart({ results }: { results: BlankResult[] 
               r.points.length && r.limits.surfaceLayerSPerM !== r.limits.lowFrequencySPerM ? (
                 <ReferenceLine
                   key={`${r.id}-face`}
-                  y={percentIacs(r.limits.surfaceLayerSPerM)}
+                  y={y(r.limits.surfaceLayerSPerM)}
                   stroke={seriesColours[i]}
                   strokeDasharray="2 4"
                 />
@@ -101,43 +163,110 @@ export function ApparentConductivityChart({ results }: { results: BlankResult[] 
           </LineChart>
         </ResponsiveContainer>
       </div>
-      <p className="mt-1 text-xs text-ink/60">
+      <p className="mt-1 text-xs text-ink/70">
         Dashed: the thickness-weighted mean (low-frequency limit). Dotted horizontal: the face layer
         (high-frequency limit). Dotted vertical: where the standard depth equals the face
-        layer&apos;s thickness.
+        layer&apos;s thickness. The axis spans every curve and every limit line.
       </p>
+      <details className="mt-2 text-sm">
+        <summary className="cursor-pointer text-patina-700">
+          The figures plotted, as a table
+        </summary>
+        <div className="overflow-x-auto">
+          <table className="mt-1 w-full text-right tabular-nums">
+            <caption className="sr-only">
+              {title} in {label}, at the decades of the sweep, and the limits
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col" className="pr-3 text-left">
+                  Frequency
+                </th>
+                {results.map((r) => (
+                  <th key={r.id} scope="col" className="pr-3">
+                    {r.name}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {samples.map((i) => (
+                <tr key={i}>
+                  <th scope="row" className="pr-3 text-left font-normal">
+                    {formatHertz(frequencies[i]!)}
+                  </th>
+                  {results.map((r) => (
+                    <td key={r.id} className="pr-3">
+                      {formatConductivity(r.points[i]!.apparentConductivitySPerM, unit)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+              <tr>
+                <th scope="row" className="pr-3 text-left font-normal">
+                  Low-frequency limit (thickness-weighted mean)
+                </th>
+                {results.map((r) => (
+                  <td key={r.id} className="pr-3">
+                    {r.limits.thicknessWeightedMeanSPerM !== null
+                      ? formatConductivity(r.limits.thicknessWeightedMeanSPerM, unit)
+                      : '—'}
+                  </td>
+                ))}
+              </tr>
+              <tr>
+                <th scope="row" className="pr-3 text-left font-normal">
+                  High-frequency limit (face layer)
+                </th>
+                {results.map((r) => (
+                  <td key={r.id} className="pr-3">
+                    {formatConductivity(r.limits.surfaceLayerSPerM, unit)}
+                  </td>
+                ))}
+              </tr>
+            </tbody>
+          </table>
+        </div>
+      </details>
     </figure>
   );
 }
 
 /** The normalised impedance plane: ΔR/X0 across, X/X0 up, each blank traced over the sweep. */
 export function ImpedancePlaneChart({ results }: { results: BlankResult[] }) {
+  const frequencies = results[0]?.points.map((p) => p.frequencyHz) ?? [];
+  const samples = samplePoints(results);
   return (
-    <figure className="rounded-md border border-patina-100 bg-white p-3">
-      <figcaption className="mb-2 text-sm font-semibold">Normalised impedance plane</figcaption>
+    <figure
+      className="rounded-md border border-patina-100 bg-white p-3"
+      aria-labelledby="impedance-chart-title"
+    >
+      <figcaption id="impedance-chart-title" className="mb-2 text-sm font-semibold">
+        Normalised impedance plane (ratios, no unit)
+      </figcaption>
       <div
         role="img"
-        aria-label="Chart of normalised reactance against normalised resistance for each blank"
+        aria-label={`Chart of normalised reactance X/X0 against normalised resistance ΔR/X0 over the sweep for ${results.map((r) => r.name).join(' and ')}; the table below the chart lists the figures`}
         className="h-80"
       >
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart margin={{ top: 8, right: 16, bottom: 20, left: 8 }}>
+          <LineChart accessibilityLayer={false} margin={{ top: 8, right: 16, bottom: 20, left: 8 }}>
             <CartesianGrid stroke="#d5ebe6" />
             <XAxis
               dataKey="x"
               type="number"
               domain={[0, 'auto']}
-              tickFormatter={(v) => Number(v).toFixed(2)}
+              tickFormatter={tickNumber}
               label={{ value: 'ΔR / X0', position: 'insideBottom', offset: -12 }}
             />
             <YAxis
               dataKey="y"
               type="number"
               domain={['auto', 'auto']}
-              tickFormatter={(v) => Number(v).toFixed(2)}
+              tickFormatter={tickNumber}
               label={{ value: 'X / X0', angle: -90, position: 'insideLeft' }}
             />
-            <Tooltip formatter={(v) => Number(v).toFixed(4)} />
+            <Tooltip formatter={(v) => formatNumber(Number(v), 4)} />
             <Legend verticalAlign="top" />
             {results.map((r, i) => (
               <Line
@@ -157,6 +286,45 @@ export function ImpedancePlaneChart({ results }: { results: BlankResult[] }) {
           </LineChart>
         </ResponsiveContainer>
       </div>
+      <details className="mt-2 text-sm">
+        <summary className="cursor-pointer text-patina-700">
+          The figures plotted, as a table
+        </summary>
+        <div className="overflow-x-auto">
+          <table className="mt-1 w-full text-right tabular-nums">
+            <caption className="sr-only">
+              Normalised resistance and reactance (ΔR/X0, X/X0) at the decades of the sweep
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col" className="pr-3 text-left">
+                  Frequency
+                </th>
+                {results.map((r) => (
+                  <th key={r.id} scope="col" className="pr-3">
+                    {r.name}: ΔR/X0, X/X0
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {samples.map((i) => (
+                <tr key={i}>
+                  <th scope="row" className="pr-3 text-left font-normal">
+                    {formatHertz(frequencies[i]!)}
+                  </th>
+                  {results.map((r) => (
+                    <td key={r.id} className="pr-3">
+                      {formatNumber(r.points[i]!.normalizedResistance)},{' '}
+                      {formatNumber(r.points[i]!.normalizedReactance)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
     </figure>
   );
 }

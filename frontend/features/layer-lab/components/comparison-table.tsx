@@ -1,6 +1,12 @@
-import { percentIacs } from '../../../../shared/units/conductivity';
 import { formatHertz, formatMetres, seriesColours } from '../../../lib/chart-format';
-import { formatDensity, formatNumber } from '../../../lib/format';
+import {
+  conductivityOverDensityName,
+  conductivityQuantityName,
+  formatConductivity,
+  formatConductivityOverDensity,
+  formatDensity,
+  formatNumber,
+} from '../../../lib/format';
 import type { UnitPreferences } from '../../../lib/unit-preferences';
 import type { BlankResult } from '../worker/protocol';
 
@@ -23,16 +29,26 @@ export function ComparisonTable({
         best = p;
     return best;
   };
+  const quantity = conductivityQuantityName(units.conductivity).toLowerCase();
   const rows: Array<[string, (r: BlankResult) => string]> = [
     ['Mass', (r) => `${formatNumber(r.massKg * 1e3)} g`],
     ['Mean density', (r) => formatDensity(r.densityKgPerM3, units.density)],
-    ['Thickness-weighted σ', (r) => `${formatNumber(percentIacs(r.meanConductivitySPerM))} %IACS`],
-    ['σ/ρ', (r) => `${formatNumber(r.conductivityOverDensity / 1e3)} (MS/m)/(g/cm³)`],
     [
-      `Apparent σ at ${formatHertz(probeHz)}`,
-      (r) => `${formatNumber(percentIacs(at(r).apparentConductivitySPerM))} %IACS`,
+      `Thickness-weighted ${quantity}`,
+      (r) => formatConductivity(r.meanConductivitySPerM, units.conductivity),
     ],
-    [`Fit residual at ${formatHertz(probeHz)}`, (r) => formatNumber(at(r).fitResidual, 2)],
+    [
+      conductivityOverDensityName,
+      (r) => formatConductivityOverDensity(r.conductivityOverDensity, units),
+    ],
+    [
+      `Apparent ${quantity} at ${formatHertz(probeHz)}`,
+      (r) => formatConductivity(at(r).apparentConductivitySPerM, units.conductivity),
+    ],
+    [
+      `Fit residual at ${formatHertz(probeHz)} (relative, no unit)`,
+      (r) => formatNumber(at(r).fitResidual, 2),
+    ],
     [
       'δ = face layer at',
       (r) => (r.faceDepthFrequencyHz === null ? '— (solid)' : formatHertz(r.faceDepthFrequencyHz)),
@@ -44,7 +60,7 @@ export function ComparisonTable({
   ];
   return (
     <div className="overflow-x-auto rounded-md border border-patina-100 bg-white">
-      <table className="w-full min-w-[36rem] text-sm">
+      <table className="w-full text-sm sm:min-w-[36rem]">
         <caption className="sr-only">Figures of the compared blanks</caption>
         <thead className="bg-patina-50">
           <tr>

@@ -1,4 +1,5 @@
-import { LengthField, NumberField } from '../../../components/length-field';
+import { BankCaution } from '../../../components/bank-caution';
+import { LengthField, NumberField, WireField } from '../../../components/length-field';
 import type { LabSettings, SettingsErrors } from '../settings';
 
 interface Props {
@@ -85,6 +86,11 @@ export function SettingsPanel({ settings: s, errors: e, onChange }: Props) {
       </fieldset>
       <fieldset className="flex flex-col gap-3 rounded-md border border-patina-100 bg-white p-3">
         <legend className="px-1 text-sm font-semibold">Launcher for the launch heights</legend>
+        <BankCaution
+          compact
+          capacitanceF={s.launch.capacitanceUF * 1e-6}
+          voltageV={s.launch.voltageV}
+        />
         <div className="flex flex-wrap gap-3">
           <NumberField
             label="Capacitance"
@@ -139,12 +145,10 @@ export function SettingsPanel({ settings: s, errors: e, onChange }: Props) {
             error={e['launch.coil.turns']}
             onChange={(turns) => coil({ turns })}
           />
-          <NumberField
-            label="Wire gauge"
-            suffix="AWG"
-            value={s.launch.coil.awg}
-            error={e['launch.coil.awg']}
-            onChange={(awg) => coil({ awg })}
+          <WireField
+            entry={s.launch.coil.wire}
+            error={e['launch.coil.wire']}
+            onChange={(wire) => coil({ wire })}
           />
         </div>
       </fieldset>

@@ -51,7 +51,7 @@ export function StackEditor({ draft, materials, colour, onChange, onRemove }: Pr
     onChange({ ...draft, layers: draft.layers.map((l, j) => (j === i ? { ...l, ...patch } : l)) });
   return (
     <fieldset
-      className="flex flex-col gap-3 rounded-md border-2 bg-white p-3"
+      className="flex min-w-0 flex-col gap-3 rounded-md border-2 bg-white p-3"
       style={{ borderColor: colour }}
     >
       <legend className="px-1 text-sm font-semibold" style={{ color: colour }}>

@@ -190,7 +190,7 @@ export function LayerLabRoute() {
       {comparison.status === 'done' ? (
         <div className="flex flex-col gap-4" aria-live="polite">
           <div className="grid gap-4 xl:grid-cols-2">
-            <ApparentConductivityChart results={comparison.results} />
+            <ApparentConductivityChart results={comparison.results} units={units} />
             <ImpedancePlaneChart results={comparison.results} />
           </div>
           <ComparisonTable

@@ -1,9 +1,11 @@
-import { percentIacs } from '../../../../shared/units/conductivity';
+import { fromSiemensPerMetre } from '../../../../shared/units/conductivity';
+import { fromKilogramsPerCubicMetre } from '../../../../shared/units/density';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { inputClass, QuantityInput } from '../../../components/quantity-input';
 import type { Reading } from '../../../lib/api-types';
 import { formatEditable } from '../../../lib/format';
+import { useUnitPreferences } from '../../../lib/unit-preferences';
 import {
   matchFormDefaults,
   matchFormSchema,
@@ -47,6 +49,12 @@ interface Props {
 
 /** A reading in; every box keeps what was typed when the service refuses it. */
 export function MatchForm({ readings, pending, onSubmit }: Props) {
+  const [units] = useUnitPreferences();
+  const defaults = {
+    ...matchFormDefaults,
+    conductivityUnit: units.conductivity,
+    densityUnit: units.density,
+  } as MatchFormInput;
   const {
     register,
     handleSubmit,
@@ -54,20 +62,23 @@ export function MatchForm({ readings, pending, onSubmit }: Props) {
     formState: { errors },
   } = useForm<MatchFormInput, unknown, MatchFormValues>({
     resolver: zodResolver(matchFormSchema),
-    defaultValues: matchFormDefaults,
+    defaultValues: defaults,
   });
 
   const fillFrom = (id: string) => {
     const r = readings.find((x) => String(x.id) === id);
     if (!r) return;
     reset({
-      ...matchFormDefaults,
-      conductivityValue: formatEditable(percentIacs(r.conductivitySPerM), 4),
-      conductivityUnit: '%IACS',
+      ...defaults,
+      conductivityValue: formatEditable(
+        fromSiemensPerMetre(r.conductivitySPerM, units.conductivity),
+        4,
+      ),
       temperatureValue: formatEditable(r.temperatureK - 273.15, 4),
       temperatureUnit: 'C',
-      densityValue: r.densityKgPerM3 ? formatEditable(r.densityKgPerM3 / 1000, 4) : '',
-      densityUnit: 'g/cm3',
+      densityValue: r.densityKgPerM3
+        ? formatEditable(fromKilogramsPerCubicMetre(r.densityKgPerM3, units.density), 4)
+        : '',
     });
   };
 

@@ -4,6 +4,7 @@ import { useReadings } from '../api/list-readings';
 import { useRunMatch } from '../api/run-match';
 import { CandidateList } from '../components/candidate-list';
 import { MatchForm } from '../components/match-form';
+import { MatchPlot } from '../components/match-plot';
 
 export function MatchRoute() {
   const readings = useReadings();
@@ -32,6 +33,13 @@ export function MatchRoute() {
           {match.data ? (
             <>
               <h2 className="text-lg font-semibold">Candidates</h2>
+              <p className="text-sm text-ink/80">
+                The fit says how well the reading, and its density when you give one, falls inside
+                each alloy&apos;s handbook range within the reading&apos;s uncertainty: 1.00 inside
+                both ranges near the nominal, lower the further outside. It ranks; it is not a
+                probability.
+              </p>
+              <MatchPlot result={match.data} />
               <CandidateList result={match.data} />
             </>
           ) : !match.isError ? (

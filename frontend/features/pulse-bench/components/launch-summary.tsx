@@ -46,7 +46,7 @@ export function LaunchSummary({ result, name }: { result: LaunchResult; name: st
         <div
           className="flex h-5 w-full overflow-hidden rounded"
           role="img"
-          aria-label="Energy ledger as a bar"
+          aria-label={`Energy ledger as a bar: ${parts.map((p) => `${p.label} ${formatNumber((p.value / e.storedJ) * 100)} %`).join(', ')}; the table below gives the joules`}
         >
           {parts.map((p) => (
             <div

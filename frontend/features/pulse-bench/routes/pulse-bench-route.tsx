@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import { capacitanceLabel } from '../../../../shared/units/codes';
-import { LengthField, NumberField } from '../../../components/length-field';
+import { LengthField, NumberField, WireField, wireProblem } from '../../../components/length-field';
+import { BankCaution, bankInSi } from '../../../components/bank-caution';
 import { NominalCaution } from '../../../components/nominal-caution';
 import { ProblemMessage } from '../../../components/problem-message';
 import { draftFromBuiltIn, useBuiltInStacks } from '../../../lib/built-in-stacks';
 import { useSavedStacks, type LengthEntry, type StackDraft } from '../../../lib/stack-drafts';
 import { useRunLaunches, type LaunchRequest } from '../api/run-launch';
 import { BinPlacement } from '../components/bin-placement';
-import { CautionPanel } from '../components/caution-panel';
 import { CurrentForceChart } from '../components/launch-charts';
 import { LaunchSummary } from '../components/launch-summary';
 
@@ -19,7 +19,8 @@ interface BenchForm {
   outerRadius: LengthEntry;
   length: LengthEntry;
   turns: number;
-  awg: number;
+  /** A gauge ('awg') or a bare diameter (mm, mil). */
+  wire: LengthEntry;
   gap: LengthEntry;
   angleDeg: number;
   blankA: string;
@@ -35,7 +36,7 @@ const initial: BenchForm = {
   outerRadius: mm(12),
   length: mm(10),
   turns: 100,
-  awg: 26,
+  wire: { value: 26, unit: 'awg' },
   gap: mm(0.5),
   angleDeg: 45,
   blankA: 'estmark-5-marks',
@@ -55,7 +56,8 @@ function validate(f: BenchForm): Record<string, string> {
   if (!ok(f.length)) e.length = 'greater than zero';
   if (!ok(f.gap, true)) e.gap = 'zero or more';
   if (!Number.isInteger(f.turns) || f.turns < 1) e.turns = 'a whole number, 1 or more';
-  if (!Number.isInteger(f.awg) || f.awg < -3 || f.awg > 56) e.awg = 'a gauge from -3 to 56';
+  const wire = wireProblem(f.wire);
+  if (wire) e.wire = wire;
   if (!Number.isFinite(f.angleDeg) || f.angleDeg < 1 || f.angleDeg > 90)
     e.angleDeg = '1 to 90 degrees';
   return e;
@@ -78,7 +80,7 @@ function requestFor(f: BenchForm, blank: StackDraft): LaunchRequest {
       outerRadius: as<Len>(f.outerRadius),
       length: as<Len>(f.length),
       turns: f.turns,
-      awg: f.awg,
+      ...(f.wire.unit === 'awg' ? { awg: f.wire.value } : { wireDiameter: as<Len>(f.wire) }),
     },
     blank: {
       diameter: as<Len>(blank.diameter),
@@ -142,7 +144,10 @@ export function PulseBenchRoute() {
           where it lands.
         </p>
       </header>
-      <CautionPanel />
+      <BankCaution
+        capacitanceF={bankInSi(form.capacitance, 'F')}
+        voltageV={bankInSi(form.voltage, 'V')}
+      />
 
       <form
         noValidate
@@ -204,13 +209,7 @@ export function PulseBenchRoute() {
             error={errors.turns}
             onChange={(turns) => set({ turns })}
           />
-          <NumberField
-            label="Wire gauge"
-            suffix="AWG"
-            value={form.awg}
-            error={errors.awg}
-            onChange={(awg) => set({ awg })}
-          />
+          <WireField entry={form.wire} error={errors.wire} onChange={(wire) => set({ wire })} />
         </fieldset>
         <fieldset className="flex flex-wrap items-start gap-3">
           <legend className="mb-1 text-sm font-semibold">Blanks and launcher</legend>

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { ProblemMessage } from '../../../components/problem-message';
+import { useMaterials } from '../../../lib/materials';
 import { uploadImport, type ImportAnswer } from '../api/review';
 
 /** Upload a CSV or JSON file: a dry run first, then, if every row is clean, a revision to review. */
@@ -10,6 +11,7 @@ export function ImportPanel({ onSubmitted }: { onSubmitted: () => void }) {
   const [progress, setProgress] = useState<number | null>(null);
   const [answer, setAnswer] = useState<ImportAnswer | null>(null);
   const [error, setError] = useState<unknown>(null);
+  const materials = useMaterials();
 
   const send = async (apply: boolean) => {
     if (!file) return;
@@ -85,7 +87,8 @@ export function ImportPanel({ onSubmitted }: { onSubmitted: () => void }) {
           <ul className="list-disc pl-5">
             {answer.changes.slice(0, 20).map((c) => (
               <li key={c.row}>
-                row {c.row}: {c.action} {c.alloy} ({c.summary})
+                row {c.row}: {c.action} {materials.data?.get(c.alloy)?.name ?? c.alloy} ({c.summary}
+                , as in the file)
               </li>
             ))}
             {answer.changes.length > 20 ? <li>… and {answer.changes.length - 20} more</li> : null}

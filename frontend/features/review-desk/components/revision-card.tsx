@@ -1,32 +1,40 @@
-import { IACS_100_S_PER_M } from '../../../../shared/units/conductivity';
 import { useState } from 'react';
+import { describeValueChange, fieldName, formatPlainValue, isValueSet } from '../../../lib/format';
+import { useMaterials } from '../../../lib/materials';
+import type { UnitPreferences } from '../../../lib/unit-preferences';
 import type { Revision } from '../api/review';
 
-/** Values in the trade's units for reading: %IACS for conductivity, g/cm³ for density. */
-const scales: Record<string, [number, string]> = {
-  conductivity: [IACS_100_S_PER_M / 100, ' %IACS'],
-  density: [1000, ' g/cm³'],
+const kindLabels: Record<string, string> = {
+  create: 'New alloy',
+  edit: 'Change',
+  retire: 'Retirement',
+  import: 'Import',
 };
 
-const fmt = (v: unknown, key = ''): string => {
-  if (v === undefined) return '—';
-  if (v && typeof v === 'object' && 'nominal' in (v as object)) {
-    const o = v as { nominal: number; min?: number | null; max?: number | null };
-    const [k, unit] = scales[key] ?? [1, ''];
-    const n = (x: number) => Number((x / k).toPrecision(5));
-    return `${n(o.nominal)}${o.min != null || o.max != null ? ` (${o.min != null ? n(o.min) : '…'}–${o.max != null ? n(o.max) : '…'})` : ''}${unit}`;
-  }
-  return v === null ? 'none' : typeof v === 'string' ? v : JSON.stringify(v);
-};
-
-/** Before → after, field by field. */
-function Diff({ revision }: { revision: Revision }) {
+/** Before → after, field by field, in the chosen units and in words. */
+function Diff({
+  revision,
+  units,
+  nameOf,
+}: {
+  revision: Revision;
+  units: UnitPreferences;
+  nameOf: (slug: string) => string;
+}) {
   if (revision.kind === 'import') {
-    const set = revision.set as unknown as { kind: string; rows: unknown[] };
+    const set = revision.set as unknown as {
+      kind: string;
+      rows: Array<{ alloy?: string }>;
+    };
+    const alloys = [...new Set(set.rows.map((r) => r.alloy).filter(Boolean) as string[])];
     return (
       <p className="text-sm">
         An import of {set.rows.length} {set.kind === 'measurements' ? 'measurements' : 'alloy rows'}
-        , applied together or not at all.
+        , applied together or not at all
+        {alloys.length
+          ? `: ${alloys.slice(0, 8).map(nameOf).join(', ')}${alloys.length > 8 ? '…' : ''}`
+          : ''}
+        .
       </p>
     );
   }
@@ -36,16 +44,28 @@ function Diff({ revision }: { revision: Revision }) {
   const before = (revision.before ?? {}) as Record<string, unknown> & {
     values?: Record<string, unknown>;
   };
-  const rows: Array<[string, unknown, unknown]> = [];
-  for (const [k, v] of Object.entries(set)) if (k !== 'values') rows.push([k, before[k], v]);
-  for (const [q, v] of Object.entries(set.values ?? {})) rows.push([q, before.values?.[q], v]);
+  const rows: Array<{ key: string; label: string; before: string; after: string }> = [];
+  for (const [k, v] of Object.entries(set))
+    if (k !== 'values')
+      rows.push({
+        key: k,
+        label: fieldName(k, units),
+        before: revision.kind === 'create' ? '—' : formatPlainValue(before[k]),
+        after: formatPlainValue(v),
+      });
+  for (const [q, v] of Object.entries(set.values ?? {})) {
+    if (!isValueSet(v)) continue;
+    const old = before.values?.[q];
+    const change = describeValueChange(q, isValueSet(old) ? old : null, v, units);
+    rows.push({ key: `values.${q}`, label: fieldName(`values.${q}`, units), ...change });
+  }
   return (
     <table className="w-full text-sm">
       <caption className="sr-only">Before and after</caption>
-      <thead className="text-left text-xs text-ink/60">
+      <thead className="text-left text-xs text-ink/70">
         <tr>
           <th scope="col" className="pr-3">
-            Field
+            What
           </th>
           <th scope="col" className="pr-3">
             Before
@@ -54,15 +74,15 @@ function Diff({ revision }: { revision: Revision }) {
         </tr>
       </thead>
       <tbody>
-        {rows.map(([k, b, a]) => (
-          <tr key={k}>
+        {rows.map((r) => (
+          <tr key={r.key} className="align-top">
             <th scope="row" className="pr-3 text-left font-medium">
-              {k}
+              {r.label}
             </th>
             <td className="pr-3 tabular-nums text-copper-700 line-through decoration-copper-300">
-              {fmt(b)}
+              {r.before}
             </td>
-            <td className="tabular-nums text-patina-700">{fmt(a)}</td>
+            <td className="tabular-nums text-patina-700">{r.after}</td>
           </tr>
         ))}
       </tbody>
@@ -75,13 +95,22 @@ export function RevisionCard({
   mine,
   onDecide,
   pending,
+  units,
 }: {
   revision: Revision;
+  units: UnitPreferences;
   mine: boolean;
   pending: boolean;
   onDecide: (decision: 'approve' | 'reject', comment: string) => void;
 }) {
   const [comment, setComment] = useState('');
+  const materials = useMaterials();
+  const nameOf = (slug: string) => materials.data?.get(slug)?.name ?? slug;
+  const before = revision.before as { name?: string } | null | undefined;
+  const created = (revision.set as { name?: string } | undefined)?.name;
+  const alloyName = revision.alloy
+    ? (before?.name ?? (revision.kind === 'create' ? created : undefined) ?? nameOf(revision.alloy))
+    : 'the table';
   const source = revision.source as unknown as {
     citation: string;
     kind: string;
@@ -91,18 +120,19 @@ export function RevisionCard({
     <li className="flex flex-col gap-3 rounded-md border border-patina-100 bg-white p-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="font-semibold">
-          #{revision.id} · {revision.kind} · {revision.alloy ?? 'the table'}
+          #{revision.id} · {kindLabels[revision.kind] ?? revision.kind} · {alloyName}
         </h3>
         <span className="text-xs text-ink/60">
           by {revision.author}, {new Date(revision.createdAt).toLocaleString()}
         </span>
       </div>
-      <Diff revision={revision} />
+      <Diff revision={revision} units={units} nameOf={nameOf} />
       <p className="text-sm">
         <span className="font-medium">Reason:</span> {revision.reason}
       </p>
       <p className="text-sm">
-        <span className="font-medium">Source ({source.kind}):</span> {source.citation}
+        <span className="font-medium">Source ({source.kind.replace(/_/g, ' ')}):</span>{' '}
+        {source.citation}
         {source.locator ? `, ${source.locator}` : ''}
       </p>
       {mine ? (

@@ -1,6 +1,8 @@
 import { Navigate } from 'react-router-dom';
 import { ProblemMessage } from '../../../components/problem-message';
+import { UnitSwitcher } from '../../../components/unit-switcher';
 import { useMe } from '../../../lib/session';
+import { useUnitPreferences } from '../../../lib/unit-preferences';
 import { usePending, useReleases, useReviewMutations } from '../api/review';
 import { ImportPanel } from '../components/import-panel';
 import { RevisionCard } from '../components/revision-card';
@@ -10,19 +12,23 @@ export function ReviewDeskRoute() {
   const pending = usePending();
   const releases = useReleases();
   const { review, publish } = useReviewMutations();
+  const [units] = useUnitPreferences();
   if (me.data === null) return <Navigate to="/sign-in" replace />;
   if (me.data && me.data.role !== 'curator' && me.data.role !== 'admin')
     return <p role="alert">The Review Desk is for curators.</p>;
   return (
     <section aria-labelledby="desk-title" className="flex flex-col gap-5">
-      <header>
-        <h1 id="desk-title" className="text-2xl font-semibold tracking-tight">
-          Review Desk
-        </h1>
-        <p className="text-sm text-ink/70">
-          Every change needs a source and a second curator. Approval applies it at once, with its
-          history.
-        </p>
+      <header className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 id="desk-title" className="text-2xl font-semibold tracking-tight">
+            Review Desk
+          </h1>
+          <p className="text-sm text-ink/70">
+            Every change needs a source and a second curator. Approval applies it at once, with its
+            history.
+          </p>
+        </div>
+        <UnitSwitcher />
       </header>
       <section aria-labelledby="queue-title" className="flex flex-col gap-3">
         <h2 id="queue-title" className="text-lg font-semibold">
@@ -40,6 +46,7 @@ export function ReviewDeskRoute() {
               revision={r}
               mine={r.author === me.data?.email}
               pending={review.isPending}
+              units={units}
               onDecide={(decision, comment) => review.mutate({ id: r.id, decision, comment })}
             />
           ))}
