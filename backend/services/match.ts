@@ -1,6 +1,10 @@
 import { restsOnMemory, type AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { formatCelsius } from '../../shared/match/format';
 import { scoreCandidate, type MatchReading } from '../../shared/match/score';
+import {
+  baseMetalsFrom,
+  type TemperatureCorrection,
+} from '../../shared/match/temperature-estimate';
 import { OutsideModelError } from '../../shared/physics/errors';
 import { InvalidQuantityError } from '../../shared/units/errors';
 import {
@@ -17,6 +21,7 @@ export interface MatchCandidate {
   fromMemory: boolean;
   score: number;
   correctedConductivitySPerM: number;
+  correction: TemperatureCorrection;
   reasons: string[];
 }
 
@@ -42,10 +47,11 @@ export function matchReading(
     );
   }
   const candidates: MatchCandidate[] = [];
+  const bases = baseMetalsFrom(alloys);
   for (const alloy of alloys) {
     let result;
     try {
-      result = scoreCandidate(reading, alloy);
+      result = scoreCandidate(reading, alloy, bases);
     } catch (error) {
       // This alloy's own coefficient (a curated figure) turns the linear law negative here:
       // it cannot be compared with this reading, the others still can.
@@ -62,6 +68,7 @@ export function matchReading(
       fromMemory: restsOnMemory(alloy),
       score: Number(result.score.toFixed(4)),
       correctedConductivitySPerM: result.correctedConductivitySPerM,
+      correction: result.correction,
       reasons: result.reasons,
     });
   }

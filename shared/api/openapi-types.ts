@@ -586,7 +586,8 @@ export interface paths {
          * Upload alloys or a measurement set (CSV or JSON); a dry run unless apply=true
          * @description Every row is checked; a file with any bad row is refused whole (422, each problem with its
          *     row and field) and changes nothing. With apply=true a clean file becomes one pending
-         *     revision, reviewed as a unit. Limits: 2 MiB, one file, 5000 rows.
+         *     revision, reviewed as a unit. Limits: one file, 5000 rows; CSV up to 20 MiB
+         *     (parsed as it streams in), JSON up to 2 MiB.
          */
         post: operations["importFile"];
         delete?: never;
@@ -798,8 +799,16 @@ export interface components {
             magnetic: boolean;
             fromMemory: boolean;
             score: number;
-            /** @description The reading corrected to this alloy's reference temperature. */
+            /** @description The reading corrected to this alloy's reference temperature (with an estimated coefficient, the correction made with the central estimate). */
             correctedConductivitySPerM: number;
+            /** @description Whether and how the reading was corrected to this alloy's reference temperature. `recorded`: with the alloy's own coefficient. `estimated`: no coefficient on record, one estimated by Matthiessen's rule from the base metal (α ≈ α_base·ρ_base/ρ_alloy, up to 1.5 times that and never above the base metal's α); the score compares the whole span the bounds give. `none`: read at the reference temperature, or nothing to estimate from (then the comparison spans α from 0 to 0.007 /K and the score is halved, so that it never ranks as confidently as a corrected one). */
+            correction: {
+                /** @enum {string} */
+                kind: "recorded" | "estimated" | "none";
+                /** @description The coefficient used, 1/K. */
+                alphaPerK?: number;
+                rule?: string;
+            };
             reasons: string[];
         };
         MatchResult: {
