@@ -89,6 +89,7 @@ function launch(job: LaunchJob, deadline: number) {
     massKg: result.massKg,
     coilInductanceH: result.coilInductanceH,
     circuitResistanceOhm: result.circuitResistanceOhm,
+    coil: result.coil,
     energy: {
       storedJ: energy.storedJ,
       coilLossJ: energy.coilLossJ,

@@ -958,6 +958,16 @@ export interface components {
             massKg: number;
             coilInductanceH: number;
             circuitResistanceOhm: number;
+            /** @description The drive coil as built, with heavy-build magnet wire (NEMA MW 1000 / IEC 60317 grade 2 overall diameters). */
+            coil: {
+                /** @description DC resistance of the winding alone */
+                resistanceOhm: number;
+                inductanceH: number;
+                /** @description Mass of the conductor */
+                wireMassKg: number;
+                /** @description The turns' overall (insulated) cross-sections over the winding window, (outer − inner radius) × length. A coil above π/(2√3) ≈ 0.907, the orthocyclic ideal, cannot be wound and is refused (422 naming /body/coil). */
+                fillFactor: number;
+            };
             energy: {
                 storedJ: number;
                 coilLossJ: number;

@@ -15,6 +15,7 @@ import {
 } from './maxwell';
 import { integrateRk45, StepLimitError } from './rk45';
 import { stackMass, type Stack } from './stack';
+import { COPPER_DENSITY_KG_PER_M3, fillFactor, heavyBuildDiameter, wireMass } from './winding';
 import { ComputeTimeExceededError } from './apparent-conductivity';
 
 export interface CapacitorBank {
@@ -25,8 +26,23 @@ export interface CapacitorBank {
 }
 
 export interface DriveCoil extends CoilGeometry {
+  /** Bare diameter of the wire, m. */
   wireDiameterM: number;
   conductorSPerM: number;
+  /** Overall diameter over the insulation, m; heavy-build magnet wire when not given. */
+  overallDiameterM?: number;
+  /** Density of the conductor, kg/m³; annealed copper when not given. */
+  conductorDensityKgPerM3?: number;
+}
+
+/** The drive coil as built: its winding's own figures. */
+export interface CoilReport {
+  /** DC resistance of the winding alone, Ω. */
+  resistanceOhm: number;
+  inductanceH: number;
+  wireMassKg: number;
+  /** Overall wire cross-sections over the window area (winding.ts). */
+  fillFactor: number;
 }
 
 export interface FilamentCounts {
@@ -73,6 +89,7 @@ export interface LaunchResult {
   coilInductanceH: number;
   circuitResistanceOhm: number;
   endTimeS: number;
+  coil: CoilReport;
   energy: {
     storedJ: number;
     coilLossJ: number;
@@ -306,8 +323,8 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     'give more coil filaments (filaments.coilRadial, filaments.coilAxial), or a winding section small against its radius',
   );
   const l1 = selfInductanceFromFilaments(coilCells);
-  const r1 =
-    bank.seriesResistanceOhm + windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
+  const windingOhm = windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
+  const r1 = bank.seriesResistanceOhm + windingOhm;
   const pulseHz = 1 / (2 * Math.PI * Math.sqrt(l1 * bank.capacitanceF));
   const slices = blankSlices(
     blank,
@@ -539,6 +556,16 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     coilInductanceH: l1,
     circuitResistanceOhm: r1,
     endTimeS: endTime,
+    coil: {
+      resistanceOhm: windingOhm,
+      inductanceH: l1,
+      wireMassKg: wireMass(
+        coil,
+        coil.wireDiameterM,
+        coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
+      ),
+      fillFactor: fillFactor(coil, coil.overallDiameterM ?? heavyBuildDiameter(coil.wireDiameterM)),
+    },
     energy: {
       storedJ: stored,
       coilLossJ: coilLoss,

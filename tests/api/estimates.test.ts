@@ -165,6 +165,40 @@ describe('POST /api/v1/estimates/launch', () => {
     });
     expectProblem(res, 400, '/body/blank/layers/0/material/density');
   });
+  it('reports the winding: DC resistance, inductance, wire mass and fill (issue 10)', async () => {
+    const res = await post('launch', launch);
+    const coil = res.body.coil;
+    // 100 turns × 2π × 8.5 mm of AWG 26 (0.405 mm bare, ASTM B258) at 58 MS/m (IEC 60028):
+    // 5.341 m / (58e6 × 1.288e-7 m²) = 0.715 Ω (arithmetic).
+    expect(coil.resistanceOhm).toBeCloseTo(0.715, 3);
+    expect(coil.inductanceH).toBe(res.body.coilInductanceH);
+    // 5.341 m × 1.2876e-7 m² × 8890 kg/m³ (C11000, ASM Handbook Vol. 2) = 6.113 g (arithmetic).
+    expect(coil.wireMassKg).toBeCloseTo(6.113e-3, 6);
+    // 100 × π/4 × (0.450 mm, heavy build after NEMA MW 1000, recalled)² / 70 mm² (arithmetic).
+    expect(coil.fillFactor).toBeCloseTo(0.227, 3);
+  });
+  it('a coil that cannot be wound → 422 naming /body/coil with the numbers (issue 10)', async () => {
+    // 100 turns of AWG 14 in a 3.2 × 3.2 mm window: the issue's review had it accepted (620 mm).
+    const res = await post('launch', {
+      ...launch,
+      coil: { innerRadius: mm(5), outerRadius: mm(8.2), length: mm(3.2), turns: 100, awg: 14 },
+    });
+    expectProblem(res, 422, '/body/coil');
+    // AWG 14 is 1.628 mm bare (ASTM B258), 1.707 mm over heavy build (NEMA MW 1000: 0.0671 in,
+    // recalled); orthocyclic cells of √3/2·D² each: 100 × 2.52 mm² = 252 mm² (arithmetic).
+    expect(res.body.detail).toMatch(
+      /100 turns of AWG 14 \(1\.71 mm over heavy-build insulation\) need 252 mm² of window even wound orthocyclically; this coil has 10\.2 mm²/,
+    );
+  });
+  it('a coil wound just within the orthocyclic ideal is accepted; with no wire given, it fills in square packing', async () => {
+    const res = await post('launch', {
+      ...launch,
+      coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100 },
+    });
+    expect(res.status).toBe(200);
+    // The wire whose overall diameter fills the window in square packing: fill π/4 (geometry).
+    expect(res.body.coil.fillFactor).toBeCloseTo(Math.PI / 4, 9);
+  });
   it('both a wire diameter and an AWG → 400', async () => {
     expectProblem(
       await post('launch', { ...launch, coil: { ...launch.coil, wireDiameter: mm(0.4) } }),
