@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { skinDepth } from '../../shared/physics/skin-depth';
+import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
 import type { Quantity } from '../../shared/units/quantity';
 import type { EstimatePool } from '../estimates/pool';
 import { siFromRequest } from '../http/quantity';
@@ -49,11 +50,21 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
     const body = req.body as { material: MaterialInput; frequencies: Quantity[] };
     const m = resolveMaterial(body.material, '/body/material', await catalogue.get());
     const frequencies = frequenciesFromRequest(body.frequencies, '/body/frequencies');
+    const warnings: EstimateWarning[] =
+      m.relativePermeability > MAGNETIC_FROM_MU_R
+        ? [
+            {
+              code: 'magnetic-layer',
+              message: `The material is magnetic: the depth uses µr = ${Number(m.relativePermeability.toPrecision(3))}, a typical initial permeability. A ferromagnetic part's µr varies with field, frequency, temper and stress by an order of magnitude, and the depth with its square root.`,
+            },
+          ]
+        : [];
     res.json({
       points: frequencies.map((frequencyHz) => ({
         frequencyHz,
         skinDepthM: skinDepth(frequencyHz, m.conductivitySPerM, m.relativePermeability),
       })),
+      warnings,
     });
   });
 

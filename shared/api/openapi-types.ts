@@ -983,8 +983,16 @@ export interface components {
                 displacementM: number;
                 speedMPerS: number;
             }[];
-            warnings: string[];
+            warnings: components["schemas"]["Warnings"];
         };
+        /** @description Something a practitioner must know beside the numbers. Codes (ours, stable): `magnetic-layer` (a magnetic material the estimate treats in a way that misleads), `coil-heating` (the winding's adiabatic temperature rise in one pulse, energy over wire mass × 385 J/(kg·K), above the 115 K that thermal class 155 (F) of IEC 60085 allows from a 40 °C ambient), `projectile-hazard` (apex above 2 m or kinetic energy above 1 J), `bank-over-rated-voltage` (charged above the bank's rated voltage), `switch-over-rating` (peak current or ∫i²dt above the switch's surge or I²t rating). */
+        EstimateWarning: {
+            /** @enum {string} */
+            code: "magnetic-layer" | "coil-heating" | "projectile-hazard" | "bank-over-rated-voltage" | "switch-over-rating";
+            message: string;
+        };
+        /** @description Empty when there is nothing to say. */
+        Warnings: components["schemas"]["EstimateWarning"][];
         BuiltInStack: {
             slug: string;
             name: string;
@@ -1355,6 +1363,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: {
                             frequencyHz: number;
                             skinDepthM: number;
@@ -1385,6 +1394,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: components["schemas"]["ImpedancePoint"][];
                     };
                 };
@@ -1412,6 +1422,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: {
                             frequencyHz: number;
                             apparentConductivitySPerM: number;

@@ -15,6 +15,14 @@ import {
 } from './maxwell';
 import { integrateRk45, StepLimitError } from './rk45';
 import { stackMass, type Stack } from './stack';
+import {
+  adiabaticRise,
+  HAZARD_HEIGHT_M,
+  HAZARD_KINETIC_J,
+  MAGNETIC_FROM_MU_R,
+  MAX_COIL_RISE_K,
+  type EstimateWarning,
+} from './warnings';
 import { COPPER_DENSITY_KG_PER_M3, fillFactor, heavyBuildDiameter, wireMass } from './winding';
 import { ComputeTimeExceededError } from './apparent-conductivity';
 
@@ -99,8 +107,8 @@ export interface LaunchResult {
     imbalanceJ: number;
   };
   series: LaunchSeriesPoint[];
-  /** What the model leaves out for this blank, in plain words. */
-  warnings: string[];
+  /** What a bench builder must know beside the numbers (warnings.ts). */
+  warnings: EstimateWarning[];
 }
 
 export const DEFAULT_FILAMENTS: FilamentCounts = {
@@ -543,13 +551,27 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   const residual = (0.5 * y[iq]! ** 2) / bank.capacitanceF + magnetic + mass * gAxis * y[is]!;
   const coilLoss = y[iec]!;
   const blankLoss = y[ieb]!;
+  const wireMassKg = wireMass(
+    coil,
+    coil.wireDiameterM,
+    coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
+  );
+  const heightM = (speed * Math.sin(theta)) ** 2 / (2 * STANDARD_GRAVITY);
+  const warnings = launchWarnings({
+    blank,
+    windingLossJ: (coilLoss * windingOhm) / r1,
+    wireMassKg,
+    heightM,
+    speedMPerS: speed,
+    kineticJ: kinetic,
+  });
   return {
     peakCurrentA: peakCurrent,
     peakCurrentTimeS: peakCurrentTime,
     peakForceN: peakForce,
     impulseNs: y[iimp]!,
     exitSpeedMPerS: speed,
-    heightM: (speed * Math.sin(theta)) ** 2 / (2 * STANDARD_GRAVITY),
+    heightM,
     rangeM: (speed * speed * Math.sin(2 * theta)) / STANDARD_GRAVITY,
     efficiency: kinetic / stored,
     massKg: mass,
@@ -559,11 +581,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     coil: {
       resistanceOhm: windingOhm,
       inductanceH: l1,
-      wireMassKg: wireMass(
-        coil,
-        coil.wireDiameterM,
-        coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
-      ),
+      wireMassKg,
       fillFactor: fillFactor(coil, coil.overallDiameterM ?? heavyBuildDiameter(coil.wireDiameterM)),
     },
     energy: {
@@ -575,12 +593,44 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       imbalanceJ: stored - coilLoss - blankLoss - kinetic - residual,
     },
     series: thin(samples, input.seriesPoints ?? 300),
-    warnings: blank.layers.some((l) => l.relativePermeability > 1.05)
-      ? [
-          'A layer is magnetic: the model treats it as non-magnetic. A ferromagnetic blank is also pulled toward the coil, so it flies lower than shown, or not at all.',
-        ]
-      : [],
+    warnings,
   };
+}
+
+const figure = (x: number) => Number(x.toPrecision(3));
+
+/**
+ * The warnings of one launch: a magnetic layer the model treats as non-magnetic; the winding's
+ * adiabatic temperature rise above its insulation class (IEC 60085, warnings.ts); a blank that
+ * rises above head height or leaves with more than 1 J.
+ */
+function launchWarnings(l: {
+  blank: Stack;
+  windingLossJ: number;
+  wireMassKg: number;
+  heightM: number;
+  speedMPerS: number;
+  kineticJ: number;
+}): EstimateWarning[] {
+  const warnings: EstimateWarning[] = [];
+  if (l.blank.layers.some((layer) => layer.relativePermeability > MAGNETIC_FROM_MU_R))
+    warnings.push({
+      code: 'magnetic-layer',
+      message:
+        'A layer is magnetic: the model treats it as non-magnetic. A ferromagnetic blank is also pulled toward the coil, so it flies lower than shown, or not at all.',
+    });
+  const rise = adiabaticRise(l.windingLossJ, l.wireMassKg);
+  if (rise > MAX_COIL_RISE_K)
+    warnings.push({
+      code: 'coil-heating',
+      message: `The winding heats by about ${figure(rise)} K in one pulse (${figure(l.windingLossJ)} J in ${figure(l.wireMassKg * 1e3)} g of copper, adiabatic), above the ${MAX_COIL_RISE_K} K that thermal class 155 (F) insulation (IEC 60085) allows from a 40 °C ambient: the enamel chars and the turns short.`,
+    });
+  if (l.heightM > HAZARD_HEIGHT_M || l.kineticJ > HAZARD_KINETIC_J)
+    warnings.push({
+      code: 'projectile-hazard',
+      message: `The blank rises ${figure(l.heightM)} m and leaves at ${figure(l.speedMPerS)} m/s with ${figure(l.kineticJ)} J: above head height (${HAZARD_HEIGHT_M} m) or ${HAZARD_KINETIC_J} J it can injure an eye or a face. Shield the bench and wear eye protection.`,
+    });
+  return warnings;
 }
 
 /** Keeps about `count` samples, evenly spaced in time, always the first and the last. */

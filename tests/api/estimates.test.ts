@@ -43,6 +43,15 @@ describe('POST /api/v1/estimates/skin-depth', () => {
     expect(res.status).toBe(200);
     expect(res.body.points[0].skinDepthM).toBeCloseTo(8.53e-3, 5);
     expect(res.body.points[1].skinDepthM).toBeCloseTo(66.1e-6, 7);
+    expect(res.body.warnings).toEqual([]);
+  });
+  it('a magnetic material → a magnetic-layer warning about its µr (issue 10)', async () => {
+    const res = await post('skin-depth', {
+      material: { alloy: 'steel-1008' },
+      frequencies: [{ value: 10, unit: 'kHz' }],
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['magnetic-layer']);
   });
   it('an alloy of the table by slug works; an unknown one → 400 naming it', async () => {
     const ok = await post('skin-depth', {
@@ -70,6 +79,7 @@ describe('POST /api/v1/estimates/impedance', () => {
       frequencies: [{ value: 900, unit: 'Hz' }],
     });
     expect(res.status).toBe(200);
+    expect(res.body.warnings).toEqual([]);
     const [p] = res.body.points;
     expect(p.coilInAir.inductanceH / 225.9e-3).toBeCloseTo(1, 2);
     expect(p.overConductor.inductanceH / 178.63e-3).toBeCloseTo(1, 2);
@@ -121,6 +131,23 @@ describe('POST /api/v1/estimates/apparent-conductivity', () => {
     expect(mid.apparentPercentIacs).toBeGreaterThan(low.apparentPercentIacs);
     expect(high.apparentPercentIacs).toBeGreaterThan(mid.apparentPercentIacs);
     expect(res.body.limits.surfaceLayerSPerM).toBeCloseTo(101 * 0.58e6, 0);
+    expect(res.body.warnings).toEqual([]);
+  });
+  it('bare low-carbon steel → a magnetic-layer warning saying how far the fit misses (issue 10)', async () => {
+    const res = await post('apparent-conductivity', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [{ material: { alloy: 'steel-1008' }, thickness: mm(1.5) }],
+      frequencies: [
+        { value: 10, unit: 'kHz' },
+        { value: 100, unit: 'kHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const worst = Math.max(...res.body.points.map((p: { fitResidual: number }) => p.fitResidual));
+    expect(res.body.warnings).toHaveLength(1);
+    expect(res.body.warnings[0].code).toBe('magnetic-layer');
+    expect(res.body.warnings[0].message).toContain(`fitResidual ${Number(worst.toPrecision(2))}`);
   });
 });
 
@@ -150,6 +177,25 @@ describe('POST /api/v1/estimates/launch', () => {
       Math.abs(e.storedJ - e.coilLossJ - e.blankLossJ - e.kineticJ - e.residualJ) / e.storedJ,
     ).toBeLessThan(0.01);
     expect(res.body.series.length).toBeGreaterThan(10);
+    expect(res.body.warnings).toEqual([]);
+  });
+  it('at 5 kV: coil-heating and projectile-hazard warnings with their figures (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, voltage: { value: 5, unit: 'kV' } },
+    });
+    expect(res.status).toBe(200);
+    const codes = res.body.warnings.map((w: { code: string }) => w.code);
+    expect(codes).toEqual(['coil-heating', 'projectile-hazard']);
+    // Winding's share of the circuit's loss over (wire mass × 385 J/(kg·K), copper, CRC).
+    const c = res.body.coil;
+    const windingJ = (res.body.energy.coilLossJ * c.resistanceOhm) / res.body.circuitResistanceOhm;
+    const rise = windingJ / (c.wireMassKg * 385);
+    // Above 155 − 40 = 115 K: IEC 60085 thermal class 155 (F) from IEC 60034-1's 40 °C ambient.
+    expect(rise).toBeGreaterThan(115);
+    expect(res.body.warnings[0].message).toContain(`${Number(rise.toPrecision(3))} K`);
+    expect(res.body.warnings[0].message).toMatch(/IEC 60085/);
+    expect(res.body.warnings[1].message).toContain(`${Number(res.body.heightM.toPrecision(3))} m`);
   });
   it('a range for an angled launcher', async () => {
     const res = await post('launch', { ...launch, launchAngleDeg: 45 });

@@ -82,7 +82,7 @@ describe('pulsed launch properties', () => {
         layers: [{ ...layer(12, 7870, 1.6e-3), relativePermeability: 100 }],
       },
     });
-    expect(steel.warnings[0]).toMatch(/magnetic/);
+    expect(steel.warnings[0]).toMatchObject({ code: 'magnetic-layer', message: /magnetic/ });
   });
 });
 
