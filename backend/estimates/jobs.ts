@@ -108,6 +108,7 @@ function launch(job: LaunchJob, deadline: number) {
       blankLossJ: energy.blankLossJ,
       kineticJ: energy.kineticJ,
       residualJ: energy.residualJ,
+      imbalanceJ: energy.imbalanceJ,
     },
     series: result.series,
     warnings: result.warnings,

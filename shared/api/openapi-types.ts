@@ -952,7 +952,9 @@ export interface components {
             peakForceN: number;
             impulseNs: number;
             exitSpeedMPerS: number;
+            /** @description Apex above the starting position: the rise made during the pulse (the displacement where the simulation ends) plus the ballistic rise from the speed there (no drag). */
             heightM: number;
+            /** @description Where the blank comes back to its starting height, from the same trajectory (no drag); 0 for a vertical launcher. */
             rangeM: number;
             efficiency: number;
             massKg: number;
@@ -975,6 +977,8 @@ export interface components {
                 kineticJ: number;
                 /** @description Left on the capacitor, in the field, and as height gained */
                 residualJ: number;
+                /** @description Stored − losses − kinetic − residual: the integration error of the ledger, ideally 0 */
+                imbalanceJ: number;
             };
             series: {
                 timeS: number;

@@ -309,7 +309,9 @@ function invert(matrix: Float64Array, n: number): Float64Array {
  * 0.01 % of the stored energy and the force is below a thousandth of its peak, or the blank is
  * three coil radii away). Mutuals by Maxwell,
  * self-inductances by the thin-ring formula. The blank rests on the coil face until the force
- * lifts it. No air drag; height and range are those of a point mass at the exit speed.
+ * lifts it. No air drag; height and range are those of a point mass leaving from where the
+ * simulation ends, at the speed it has there ({@link ballistics}): the apex counts the rise made
+ * during the pulse.
  */
 export function simulateLaunch(input: LaunchInput): LaunchResult {
   const counts = { ...DEFAULT_FILAMENTS, ...input.filaments };
@@ -556,7 +558,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     coil.wireDiameterM,
     coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
   );
-  const heightM = (speed * Math.sin(theta)) ** 2 / (2 * STANDARD_GRAVITY);
+  const { heightM, rangeM } = ballistics(y[is]!, speed, theta);
   const warnings = launchWarnings({
     blank,
     windingLossJ: (coilLoss * windingOhm) / r1,
@@ -572,7 +574,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     impulseNs: y[iimp]!,
     exitSpeedMPerS: speed,
     heightM,
-    rangeM: (speed * speed * Math.sin(2 * theta)) / STANDARD_GRAVITY,
+    rangeM,
     efficiency: kinetic / stored,
     massKg: mass,
     coilInductanceH: l1,
@@ -598,6 +600,30 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
 }
 
 const figure = (x: number) => Number(x.toPrecision(3));
+
+/**
+ * Apex and range of a point mass (no drag) that is `displacementM` along the launcher's axis from
+ * its starting position, moving along it at `speedMPerS`, the axis at `theta` above horizontal:
+ * apex = s·sin θ + (v·sin θ)²/2g above the start, the rise made during the pulse included;
+ * range = s·cos θ + v·cos θ·t, where t solves s·sin θ + v·sin θ·t − g·t²/2 = 0 (landing at the
+ * starting height). Projectile motion in uniform gravity (any mechanics text).
+ * @example ballistics(0.01, 2, Math.PI / 2) // { heightM: 0.2139…, rangeM: ~0 }
+ */
+export function ballistics(
+  displacementM: number,
+  speedMPerS: number,
+  theta: number,
+): { heightM: number; rangeM: number } {
+  const g = STANDARD_GRAVITY;
+  const y0 = displacementM * Math.sin(theta);
+  const vy = speedMPerS * Math.sin(theta);
+  const vx = speedMPerS * Math.cos(theta);
+  const flight = (vy + Math.sqrt(vy * vy + 2 * g * Math.max(0, y0))) / g;
+  return {
+    heightM: y0 + (vy * vy) / (2 * g),
+    rangeM: displacementM * Math.cos(theta) + vx * flight,
+  };
+}
 
 /**
  * The warnings of one launch: a magnetic layer the model treats as non-magnetic; the winding's

@@ -178,6 +178,9 @@ describe('POST /api/v1/estimates/launch', () => {
     ).toBeLessThan(0.01);
     expect(res.body.series.length).toBeGreaterThan(10);
     expect(res.body.warnings).toEqual([]);
+    expect(Math.abs(e.imbalanceJ) / e.storedJ).toBeLessThan(1e-6);
+    // The apex counts the rise during the pulse: above the final-speed-only v²/2g (issue 10).
+    expect(res.body.heightM).toBeGreaterThan(res.body.exitSpeedMPerS ** 2 / (2 * 9.80665));
   });
   it('at 5 kV: coil-heating and projectile-hazard warnings with their figures (issue 10)', async () => {
     const res = await post('launch', {
