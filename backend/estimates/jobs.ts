@@ -93,6 +93,7 @@ function launch(job: LaunchJob, deadline: number) {
     peakCurrentA: result.peakCurrentA,
     peakCurrentTimeS: result.peakCurrentTimeS,
     peakForceN: result.peakForceN,
+    i2tA2s: result.i2tA2s,
     impulseNs: result.impulseNs,
     exitSpeedMPerS: result.exitSpeedMPerS,
     heightM: result.heightM,

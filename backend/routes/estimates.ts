@@ -11,8 +11,10 @@ import {
   frequenciesFromRequest,
   resolveMaterial,
   sensorLayersFromRequest,
+  switchFromRequest,
   wireFromRequest,
   type CoilInput,
+  type SwitchInput,
   type LayerInput,
   type MaterialInput,
 } from '../services/estimate-inputs';
@@ -25,7 +27,13 @@ interface SensorBody {
 }
 
 interface LaunchBody {
-  bank: { capacitance: Quantity; voltage: Quantity; seriesResistance: Quantity };
+  bank: {
+    capacitance: Quantity;
+    voltage: Quantity;
+    seriesResistance: Quantity;
+    ratedVoltage?: Quantity;
+  };
+  switch?: SwitchInput;
   coil: CoilInput;
   blank: { diameter: Quantity; layers: Array<{ material: MaterialInput; thickness: Quantity }> };
   gap: Quantity;
@@ -101,7 +109,11 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
           body.bank.seriesResistance,
           '/body/bank/seriesResistance',
         ),
+        ratedVoltageV: body.bank.ratedVoltage
+          ? siFromRequest('voltage', body.bank.ratedVoltage, '/body/bank/ratedVoltage')
+          : undefined,
       },
+      switchRating: body.switch ? switchFromRequest(body.switch, '/body/switch') : undefined,
       coil: { ...geometry, ...wire },
       blank: {
         diameterM: siFromRequest('length', body.blank.diameter, '/body/blank/diameter'),

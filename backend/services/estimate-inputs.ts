@@ -14,6 +14,8 @@ import type { CoilGeometry } from '../../shared/physics/coil';
 import type { ConductorLayer } from '../../shared/physics/dodd-deeds';
 import type { StackLayer } from '../../shared/physics/stack';
 import { IACS_100_S_PER_M } from '../../shared/units/conductivity';
+import { InvalidQuantityError, UnknownUnitError } from '../../shared/units/errors';
+import { toAmpereSquaredSeconds, toAmperes } from '../../shared/units/pulse-ratings';
 import type { Quantity } from '../../shared/units/quantity';
 import { siFromRequest } from '../http/quantity';
 import { ProblemError } from '../http/problem';
@@ -236,4 +238,29 @@ export function blankLayersFromRequest(
 
 export function frequenciesFromRequest(frequencies: Quantity[], path: string): number[] {
   return frequencies.map((f, i) => siFromRequest('frequency', f, `${path}/${i}`));
+}
+
+/** A switch's pulse ratings as the request gives them. */
+export interface SwitchInput {
+  surgeCurrentRating: Quantity;
+  i2tRating: Quantity;
+}
+
+/** One rating in SI, or a 400 naming its unit or value (as siFromRequest does for the others). */
+function rating(convert: (v: number, u: string) => number, q: Quantity, path: string): number {
+  try {
+    return convert(q.value, q.unit);
+  } catch (error) {
+    if (error instanceof UnknownUnitError) throw invalid(`${path}/unit`, error.message);
+    if (error instanceof InvalidQuantityError) throw invalid(`${path}/value`, error.message);
+    throw error;
+  }
+}
+
+/** The switch's non-repetitive surge current (A) and I²t (A²s) ratings. */
+export function switchFromRequest(sw: SwitchInput, path: string) {
+  return {
+    surgeCurrentA: rating(toAmperes, sw.surgeCurrentRating, `${path}/surgeCurrentRating`),
+    i2tA2s: rating(toAmpereSquaredSeconds, sw.i2tRating, `${path}/i2tRating`),
+  };
 }

@@ -915,6 +915,16 @@ export interface components {
             /** @enum {string} */
             unit: "V" | "kV";
         };
+        CurrentQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "A" | "kA";
+        };
+        I2tQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "A2s" | "A²s" | "kA2s" | "kA²s";
+        };
         ResistanceQuantity: {
             value: number;
             /** @enum {string} */
@@ -925,10 +935,17 @@ export interface components {
             thickness: components["schemas"]["LengthQuantity"];
         };
         LaunchRequest: {
+            /** @description The capacitor bank; `ratedVoltage` is the capacitor's rated voltage: charged above it, the answer warns `bank-over-rated-voltage`. */
             bank: {
                 capacitance: components["schemas"]["CapacitanceQuantity"];
                 voltage: components["schemas"]["VoltageQuantity"];
                 seriesResistance: components["schemas"]["ResistanceQuantity"];
+                ratedVoltage?: components["schemas"]["VoltageQuantity"];
+            };
+            /** @description The switch's pulse ratings from its datasheet: non-repetitive surge current (I_TSM, a 10 ms half-sine at 50 Hz) and I²t. The pulse's peak current and ∫i²dt are compared with them (`switch-over-rating`). A 10 ms half-sine of peak I has I²t = I²·0.005 A²s. */
+            switch?: {
+                surgeCurrentRating: components["schemas"]["CurrentQuantity"];
+                i2tRating: components["schemas"]["I2tQuantity"];
             };
             coil: components["schemas"]["Coil"];
             blank: {
@@ -950,6 +967,8 @@ export interface components {
             peakCurrentA: number;
             peakCurrentTimeS: number;
             peakForceN: number;
+            /** @description ∫i²dt of the drive current over the pulse, A²s */
+            i2tA2s: number;
             impulseNs: number;
             exitSpeedMPerS: number;
             /** @description Apex above the starting position: the rise made during the pulse (the displacement where the simulation ends) plus the ballistic rise from the speed there (no drag). */

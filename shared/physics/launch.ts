@@ -31,6 +31,18 @@ export interface CapacitorBank {
   voltageV: number;
   /** Switch, leads and capacitor ESR, Ω; the winding's own resistance is added to it. */
   seriesResistanceOhm: number;
+  /** The capacitor's rated voltage, V: charging above it raises `bank-over-rated-voltage`. */
+  ratedVoltageV?: number;
+}
+
+/**
+ * A thyristor's or triac's pulse ratings: the non-repetitive surge current I_TSM (for a 10 ms
+ * half-sine at 50 Hz, or 8.3 ms at 60 Hz) and the I²t for fusing; the pulse's peak current and
+ * ∫i²dt are compared with them (`switch-over-rating`).
+ */
+export interface SwitchRating {
+  surgeCurrentA: number;
+  i2tA2s: number;
 }
 
 export interface DriveCoil extends CoilGeometry {
@@ -68,6 +80,7 @@ export interface LaunchInput {
   blank: Stack;
   /** Coil face to blank face, m. */
   gapM: number;
+  switchRating?: SwitchRating;
   /** Elevation of the launcher's axis above horizontal, degrees (90: straight up). */
   launchAngleDeg: number;
   filaments?: Partial<FilamentCounts>;
@@ -88,6 +101,8 @@ export interface LaunchResult {
   peakCurrentA: number;
   peakCurrentTimeS: number;
   peakForceN: number;
+  /** ∫i²dt of the drive current over the pulse, A²s. */
+  i2tA2s: number;
   impulseNs: number;
   exitSpeedMPerS: number;
   heightM: number;
@@ -559,7 +574,13 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
   );
   const { heightM, rangeM } = ballistics(y[is]!, speed, theta);
+  // The coil-side loss is ∫r1·i1²dt with r1 constant: the let-through integral follows exactly.
+  const i2tA2s = coilLoss / r1;
   const warnings = launchWarnings({
+    bank,
+    switchRating: input.switchRating,
+    peakCurrentA: peakCurrent,
+    i2tA2s,
     blank,
     windingLossJ: (coilLoss * windingOhm) / r1,
     wireMassKg,
@@ -571,6 +592,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     peakCurrentA: peakCurrent,
     peakCurrentTimeS: peakCurrentTime,
     peakForceN: peakForce,
+    i2tA2s,
     impulseNs: y[iimp]!,
     exitSpeedMPerS: speed,
     heightM,
@@ -631,6 +653,10 @@ export function ballistics(
  * rises above head height or leaves with more than 1 J.
  */
 function launchWarnings(l: {
+  bank: CapacitorBank;
+  switchRating: SwitchRating | undefined;
+  peakCurrentA: number;
+  i2tA2s: number;
   blank: Stack;
   windingLossJ: number;
   wireMassKg: number;
@@ -656,6 +682,26 @@ function launchWarnings(l: {
       code: 'projectile-hazard',
       message: `The blank rises ${figure(l.heightM)} m and leaves at ${figure(l.speedMPerS)} m/s with ${figure(l.kineticJ)} J: above head height (${HAZARD_HEIGHT_M} m) or ${HAZARD_KINETIC_J} J it can injure an eye or a face. Shield the bench and wear eye protection.`,
     });
+  const rated = l.bank.ratedVoltageV;
+  if (rated !== undefined && l.bank.voltageV > rated)
+    warnings.push({
+      code: 'bank-over-rated-voltage',
+      message: `The bank is charged to ${figure(l.bank.voltageV)} V, above its rated ${figure(rated)} V (${figure((l.bank.voltageV / rated - 1) * 100)} % over): outside the capacitor's datasheet, whatever the result; it may fail short or vent.`,
+    });
+  const sw = l.switchRating;
+  if (sw && (l.peakCurrentA > sw.surgeCurrentA || l.i2tA2s > sw.i2tA2s)) {
+    const over: string[] = [];
+    if (l.peakCurrentA > sw.surgeCurrentA)
+      over.push(
+        `a peak of ${figure(l.peakCurrentA)} A against its ${figure(sw.surgeCurrentA)} A surge rating`,
+      );
+    if (l.i2tA2s > sw.i2tA2s)
+      over.push(`∫i²dt of ${figure(l.i2tA2s)} A²s against its ${figure(sw.i2tA2s)} A²s I²t rating`);
+    warnings.push({
+      code: 'switch-over-rating',
+      message: `The switch is over its ratings: ${over.join(' and ')}. A thyristor's surge rating is for one 10 ms half-sine; beyond it the junction can fail short.`,
+    });
+  }
   return warnings;
 }
 

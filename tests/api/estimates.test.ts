@@ -248,6 +248,61 @@ describe('POST /api/v1/estimates/launch', () => {
     // The wire whose overall diameter fills the window in square packing: fill π/4 (geometry).
     expect(res.body.coil.fillFactor).toBeCloseTo(Math.PI / 4, 9);
   });
+  it('returns ∫i²dt; a switch within its ratings and a bank within its rated voltage → no warning (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, ratedVoltage: { value: 450, unit: 'V' } },
+      // A small 25 A thyristor of the common TO-220 kind: I_TSM of a few hundred amperes and
+      // an I²t of a few hundred A²s (common practice, no source).
+      switch: {
+        surgeCurrentRating: { value: 300, unit: 'A' },
+        i2tRating: { value: 450, unit: 'A2s' },
+      },
+    });
+    expect(res.status).toBe(200);
+    const r = res.body;
+    // The coil-side loss is ∫r1·i²dt with r1 constant, so ∫i²dt = loss / r1 (arithmetic).
+    expect(r.i2tA2s).toBeCloseTo(r.energy.coilLossJ / r.circuitResistanceOhm, 9);
+    // A pulse of ~200 A over tens of µs lets through far less than a 10 ms half-sine of the same
+    // peak, I²·0.005 A²s (physics.md, arithmetic).
+    expect(r.i2tA2s).toBeLessThan(r.peakCurrentA ** 2 * 0.005);
+    expect(r.warnings).toEqual([]);
+  });
+  it('a switch over its surge and I²t ratings and a bank over its rated voltage → warnings with the figures (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, ratedVoltage: { value: 350, unit: 'V' } },
+      switch: {
+        surgeCurrentRating: { value: 0.1, unit: 'kA' },
+        i2tRating: { value: 1, unit: 'A²s' },
+      },
+    });
+    expect(res.status).toBe(200);
+    const byCode = Object.fromEntries(
+      res.body.warnings.map((w: { code: string; message: string }) => [w.code, w.message]),
+    );
+    expect(Object.keys(byCode)).toEqual(['bank-over-rated-voltage', 'switch-over-rating']);
+    expect(byCode['bank-over-rated-voltage']).toContain('charged to 400 V, above its rated 350 V');
+    expect(byCode['switch-over-rating']).toContain(
+      `a peak of ${Number(res.body.peakCurrentA.toPrecision(3))} A against its 100 A surge rating`,
+    );
+    expect(byCode['switch-over-rating']).toContain(
+      `∫i²dt of ${Number(res.body.i2tA2s.toPrecision(3))} A²s against its 1 A²s I²t rating`,
+    );
+  });
+  it('a rating in an unknown unit → 400 naming it', async () => {
+    expectProblem(
+      await post('launch', {
+        ...launch,
+        switch: {
+          surgeCurrentRating: { value: 100, unit: 'mA' },
+          i2tRating: { value: 1, unit: 'A2s' },
+        },
+      }),
+      400,
+      '/body/switch/surgeCurrentRating/unit',
+    );
+  });
   it('both a wire diameter and an AWG → 400', async () => {
     expectProblem(
       await post('launch', { ...launch, coil: { ...launch.coil, wireDiameter: mm(0.4) } }),
