@@ -159,6 +159,21 @@ export interface paths {
          * @description The σ of a homogeneous, non-magnetic plate of the same total thickness whose normalised
          *     ΔZ lies nearest the stack's (least squares in the normalised impedance plane), with the
          *     residual of that fit and the two limits.
+         *
+         *     The reading tends to the thickness-weighted mean at low frequency and to the face layer at
+         *     high frequency, but not always from below: a thin good-conductor plating on a poorer
+         *     conductor can read above its own bulk conductivity where the standard depth is about the
+         *     plating thickness (8 µm of copper on zinc reaches some 109 %IACS near δ ≈ 0.8–0.9 × the
+         *     plating). This is physics, not a fault of the fit. The eddy currents, crowded into the
+         *     plating and reflected at its boundary with the poorer layer, give a ΔZ whose point in the
+         *     normalised impedance plane does not lie on the curve of homogeneous plates between the two
+         *     layers' values: the layered stack's curve (Dodd & Deeds, J. Appl. Phys. 39, 2829, 1968,
+         *     and the coated-conductor analyses that followed, e.g. the effective-conductivity
+         *     treatments of plated and clad parts in the eddy-current testing literature) crosses the
+         *     homogeneous reference curve at a point of higher σ, and that is where the nearest
+         *     homogeneous plate sits. A reading above the face's bulk value means δ is near the
+         *     plating's thickness, not that the plating is silver. A stack with a magnetic layer gets a
+         *     `magnetic-layer` warning instead: no non-magnetic plate describes it.
          */
         post: operations["estimateApparentConductivity"];
         delete?: never;

@@ -133,6 +133,27 @@ describe('POST /api/v1/estimates/apparent-conductivity', () => {
     expect(res.body.limits.surfaceLayerSPerM).toBeCloseTo(101 * 0.58e6, 0);
     expect(res.body.warnings).toEqual([]);
   });
+  it('a thin copper plating reads above its own bulk conductivity near δ ≈ its thickness (documented overshoot, issue 10)', async () => {
+    // 50 µm of copper (101 %IACS, the table's C11000) on zinc: δ at 2 MHz is 46 µm (physics.md's
+    // formula), 0.93 × the plating. Layered stack's curve crosses the homogeneous one at a higher σ.
+    const res = await post('apparent-conductivity', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [
+        { material: copper, thickness: um(50) },
+        { material: zinc, thickness: mm(1.34) },
+      ],
+      frequencies: [
+        { value: 2, unit: 'MHz' },
+        { value: 50, unit: 'MHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const [near, far] = res.body.points;
+    expect(near.apparentPercentIacs).toBeGreaterThan(105);
+    // Far above, where δ ≪ the plating, it comes back to the face layer's value.
+    expect(far.apparentPercentIacs).toBeCloseTo(101, 0);
+  });
   it('bare low-carbon steel → a magnetic-layer warning saying how far the fit misses (issue 10)', async () => {
     const res = await post('apparent-conductivity', {
       coil: SENSOR_COIL,
