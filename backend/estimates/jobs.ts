@@ -10,6 +10,7 @@ import {
   type ConductorLayer,
 } from '../../shared/physics/dodd-deeds';
 import { simulateLaunch, type LaunchInput } from '../../shared/physics/launch';
+import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
 import { percentIacs } from '../../shared/units/conductivity';
 import { kernelFor } from './kernel-cache';
 
@@ -57,12 +58,22 @@ function impedancePoints(job: SensorJob, deadline: number) {
         normalized: { resistance: p.normalizedResistance, reactance: p.normalizedReactance },
       };
     }),
+    warnings: [] as EstimateWarning[],
   };
 }
 
 function apparentConductivity(job: SensorJob, deadline: number) {
   const kernel = kernelFor(job.coil, job.liftOffM);
   const points = apparentConductivitySweep(kernel, job.layers, job.frequenciesHz, { deadline });
+  const warnings: EstimateWarning[] = [];
+  const muR = Math.max(...job.layers.map((l) => l.relativePermeability));
+  if (muR > MAGNETIC_FROM_MU_R) {
+    const worst = Math.max(...points.map((p) => p.fitResidual));
+    warnings.push({
+      code: 'magnetic-layer',
+      message: `A layer is magnetic (µr up to ${Number(muR.toPrecision(3))}): an apparent conductivity read against non-magnetic calibration blocks is not meaningful here. The nearest homogeneous non-magnetic plate misses the stack's normalised impedance by up to ${Number((worst * 100).toPrecision(2))} % (fitResidual ${Number(worst.toPrecision(2))}), and the readings need not approach the limits given.`,
+    });
+  }
   return {
     points: points.map((p) => ({
       frequencyHz: p.frequencyHz,
@@ -71,6 +82,7 @@ function apparentConductivity(job: SensorJob, deadline: number) {
       fitResidual: p.fitResidual,
     })),
     limits: conductivityLimits(job.layers),
+    warnings,
   };
 }
 
@@ -81,6 +93,7 @@ function launch(job: LaunchJob, deadline: number) {
     peakCurrentA: result.peakCurrentA,
     peakCurrentTimeS: result.peakCurrentTimeS,
     peakForceN: result.peakForceN,
+    i2tA2s: result.i2tA2s,
     impulseNs: result.impulseNs,
     exitSpeedMPerS: result.exitSpeedMPerS,
     heightM: result.heightM,
@@ -89,12 +102,14 @@ function launch(job: LaunchJob, deadline: number) {
     massKg: result.massKg,
     coilInductanceH: result.coilInductanceH,
     circuitResistanceOhm: result.circuitResistanceOhm,
+    coil: result.coil,
     energy: {
       storedJ: energy.storedJ,
       coilLossJ: energy.coilLossJ,
       blankLossJ: energy.blankLossJ,
       kineticJ: energy.kineticJ,
       residualJ: energy.residualJ,
+      imbalanceJ: energy.imbalanceJ,
     },
     series: result.series,
     warnings: result.warnings,

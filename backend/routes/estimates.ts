@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { skinDepth } from '../../shared/physics/skin-depth';
+import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
 import type { Quantity } from '../../shared/units/quantity';
 import type { EstimatePool } from '../estimates/pool';
 import { siFromRequest } from '../http/quantity';
@@ -10,8 +11,10 @@ import {
   frequenciesFromRequest,
   resolveMaterial,
   sensorLayersFromRequest,
+  switchFromRequest,
   wireFromRequest,
   type CoilInput,
+  type SwitchInput,
   type LayerInput,
   type MaterialInput,
 } from '../services/estimate-inputs';
@@ -24,7 +27,13 @@ interface SensorBody {
 }
 
 interface LaunchBody {
-  bank: { capacitance: Quantity; voltage: Quantity; seriesResistance: Quantity };
+  bank: {
+    capacitance: Quantity;
+    voltage: Quantity;
+    seriesResistance: Quantity;
+    ratedVoltage?: Quantity;
+  };
+  switch?: SwitchInput;
   coil: CoilInput;
   blank: { diameter: Quantity; layers: Array<{ material: MaterialInput; thickness: Quantity }> };
   gap: Quantity;
@@ -49,11 +58,21 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
     const body = req.body as { material: MaterialInput; frequencies: Quantity[] };
     const m = resolveMaterial(body.material, '/body/material', await catalogue.get());
     const frequencies = frequenciesFromRequest(body.frequencies, '/body/frequencies');
+    const warnings: EstimateWarning[] =
+      m.relativePermeability > MAGNETIC_FROM_MU_R
+        ? [
+            {
+              code: 'magnetic-layer',
+              message: `The material is magnetic: the depth uses µr = ${Number(m.relativePermeability.toPrecision(3))}, a typical initial permeability. A ferromagnetic part's µr varies with field, frequency, temper and stress by an order of magnitude, and the depth with its square root.`,
+            },
+          ]
+        : [];
     res.json({
       points: frequencies.map((frequencyHz) => ({
         frequencyHz,
         skinDepthM: skinDepth(frequencyHz, m.conductivitySPerM, m.relativePermeability),
       })),
+      warnings,
     });
   });
 
@@ -90,7 +109,11 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
           body.bank.seriesResistance,
           '/body/bank/seriesResistance',
         ),
+        ratedVoltageV: body.bank.ratedVoltage
+          ? siFromRequest('voltage', body.bank.ratedVoltage, '/body/bank/ratedVoltage')
+          : undefined,
       },
+      switchRating: body.switch ? switchFromRequest(body.switch, '/body/switch') : undefined,
       coil: { ...geometry, ...wire },
       blank: {
         diameterM: siFromRequest('length', body.blank.diameter, '/body/blank/diameter'),

@@ -1,10 +1,21 @@
 import { valueOf } from '../../shared/catalogue/alloy-record';
 import { awgDiameter } from '../../shared/physics/awg';
 import { OutsideModelError } from '../../shared/physics/errors';
+import {
+  bareDiameterFor,
+  COPPER_DENSITY_KG_PER_M3,
+  fillFactor,
+  heavyBuildDiameter,
+  MAX_FILL,
+  windowArea,
+  windowNeeded,
+} from '../../shared/physics/winding';
 import type { CoilGeometry } from '../../shared/physics/coil';
 import type { ConductorLayer } from '../../shared/physics/dodd-deeds';
 import type { StackLayer } from '../../shared/physics/stack';
 import { IACS_100_S_PER_M } from '../../shared/units/conductivity';
+import { InvalidQuantityError, UnknownUnitError } from '../../shared/units/errors';
+import { toAmpereSquaredSeconds, toAmperes } from '../../shared/units/pulse-ratings';
 import type { Quantity } from '../../shared/units/quantity';
 import { siFromRequest } from '../http/quantity';
 import { ProblemError } from '../http/problem';
@@ -122,9 +133,15 @@ export function coilFromRequest(coil: CoilInput, path: string): CoilGeometry {
   };
 }
 
+const mm2 = (m2: number) => `${Number((m2 * 1e6).toPrecision(3))} mm²`;
+const mmText = (m: number) => `${Number((m * 1e3).toPrecision(3))} mm`;
+
 /**
- * The drive coil's wire: a diameter, an AWG (ASTM B258), or, given neither, the diameter that
- * fills the winding section in square packing. The conductor defaults to annealed copper.
+ * The drive coil's wire: a bare diameter, an AWG (ASTM B258), or, given neither, the wire whose
+ * heavy-build overall diameter fills the winding section in square packing (layer winding). The
+ * insulation is heavy-build magnet wire ({@link heavyBuildDiameter}); a coil whose turns do not
+ * fit its window even at the densest packing ({@link MAX_FILL}) is refused with the numbers
+ * (OutsideModelError on `path`, a 422). The conductor defaults to annealed copper.
  */
 export function wireFromRequest(
   coil: CoilInput,
@@ -134,27 +151,40 @@ export function wireFromRequest(
 ) {
   if (coil.wireDiameter && coil.awg !== undefined)
     throw invalid(`${path}/awg`, 'give a wire diameter or an AWG, not both');
-  const wireDiameterM = coil.wireDiameter
-    ? atLeast(
-        siFromRequest('length', coil.wireDiameter, `${path}/wireDiameter`),
-        MIN_DIMENSION_M,
-        `${path}/wireDiameter`,
-        "the wire's diameter",
-      )
-    : coil.awg !== undefined
-      ? awgDiameter(coil.awg)
-      : atLeast(
-          Math.sqrt(
-            ((geometry.outerRadiusM - geometry.innerRadiusM) * geometry.lengthM) / geometry.turns,
-          ),
-          MIN_DIMENSION_M,
-          `${path}/turns`,
-          'the wire that these turns leave room for in the winding section',
-        );
-  const conductorSPerM = coil.conductor
-    ? resolveMaterial(coil.conductor, `${path}/conductor`, catalogue).conductivitySPerM
-    : IACS_100_S_PER_M;
-  return { wireDiameterM, conductorSPerM };
+  let wireDiameterM: number;
+  if (coil.wireDiameter)
+    wireDiameterM = atLeast(
+      siFromRequest('length', coil.wireDiameter, `${path}/wireDiameter`),
+      MIN_DIMENSION_M,
+      `${path}/wireDiameter`,
+      "the wire's diameter",
+    );
+  else if (coil.awg !== undefined) wireDiameterM = awgDiameter(coil.awg);
+  else
+    wireDiameterM = atLeast(
+      bareDiameterFor(Math.sqrt(windowArea(geometry) / geometry.turns)),
+      MIN_DIMENSION_M,
+      `${path}/turns`,
+      'the wire that these turns leave room for in the winding section',
+    );
+  const overallDiameterM = heavyBuildDiameter(wireDiameterM);
+  const fill = fillFactor(geometry, overallDiameterM);
+  if (!(fill <= MAX_FILL)) {
+    const wire = coil.awg !== undefined ? `AWG ${coil.awg}` : `${mmText(wireDiameterM)} wire`;
+    throw new OutsideModelError(
+      path,
+      `${geometry.turns} turns of ${wire} (${mmText(overallDiameterM)} over heavy-build insulation) need ${mm2(windowNeeded(geometry.turns, overallDiameterM))} of window even wound orthocyclically; this coil has ${mm2(windowArea(geometry))} (fill ${Number(fill.toPrecision(3))}, where no winding of round wire passes ${MAX_FILL.toFixed(3)})`,
+    );
+  }
+  const conductor = coil.conductor
+    ? resolveMaterial(coil.conductor, `${path}/conductor`, catalogue)
+    : undefined;
+  return {
+    wireDiameterM,
+    overallDiameterM,
+    conductorSPerM: conductor ? conductor.conductivitySPerM : IACS_100_S_PER_M,
+    conductorDensityKgPerM3: conductor?.densityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
+  };
 }
 
 export function sensorLayersFromRequest(
@@ -208,4 +238,29 @@ export function blankLayersFromRequest(
 
 export function frequenciesFromRequest(frequencies: Quantity[], path: string): number[] {
   return frequencies.map((f, i) => siFromRequest('frequency', f, `${path}/${i}`));
+}
+
+/** A switch's pulse ratings as the request gives them. */
+export interface SwitchInput {
+  surgeCurrentRating: Quantity;
+  i2tRating: Quantity;
+}
+
+/** One rating in SI, or a 400 naming its unit or value (as siFromRequest does for the others). */
+function rating(convert: (v: number, u: string) => number, q: Quantity, path: string): number {
+  try {
+    return convert(q.value, q.unit);
+  } catch (error) {
+    if (error instanceof UnknownUnitError) throw invalid(`${path}/unit`, error.message);
+    if (error instanceof InvalidQuantityError) throw invalid(`${path}/value`, error.message);
+    throw error;
+  }
+}
+
+/** The switch's non-repetitive surge current (A) and I²t (A²s) ratings. */
+export function switchFromRequest(sw: SwitchInput, path: string) {
+  return {
+    surgeCurrentA: rating(toAmperes, sw.surgeCurrentRating, `${path}/surgeCurrentRating`),
+    i2tA2s: rating(toAmpereSquaredSeconds, sw.i2tRating, `${path}/i2tRating`),
+  };
 }

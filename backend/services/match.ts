@@ -1,6 +1,10 @@
 import { restsOnMemory, type AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { formatCelsius } from '../../shared/match/format';
 import { scoreCandidate, type MatchReading, type ScoredRange } from '../../shared/match/score';
+import {
+  baseMetalsFrom,
+  type TemperatureCorrection,
+} from '../../shared/match/temperature-estimate';
 import { OutsideModelError } from '../../shared/physics/errors';
 import { InvalidQuantityError } from '../../shared/units/errors';
 import {
@@ -19,6 +23,7 @@ export interface MatchCandidate {
   correctedConductivitySPerM: number;
   conductivityRangeSPerM: ScoredRange;
   densityRangeKgPerM3: ScoredRange | null;
+  correction: TemperatureCorrection;
   reasons: string[];
 }
 
@@ -44,10 +49,11 @@ export function matchReading(
     );
   }
   const candidates: MatchCandidate[] = [];
+  const bases = baseMetalsFrom(alloys);
   for (const alloy of alloys) {
     let result;
     try {
-      result = scoreCandidate(reading, alloy);
+      result = scoreCandidate(reading, alloy, bases);
     } catch (error) {
       // This alloy's own coefficient (a curated figure) turns the linear law negative here:
       // it cannot be compared with this reading, the others still can.
@@ -66,6 +72,7 @@ export function matchReading(
       correctedConductivitySPerM: result.correctedConductivitySPerM,
       conductivityRangeSPerM: result.conductivityRangeSPerM,
       densityRangeKgPerM3: result.densityRangeKgPerM3,
+      correction: result.correction,
       reasons: result.reasons,
     });
   }

@@ -159,6 +159,21 @@ export interface paths {
          * @description The σ of a homogeneous, non-magnetic plate of the same total thickness whose normalised
          *     ΔZ lies nearest the stack's (least squares in the normalised impedance plane), with the
          *     residual of that fit and the two limits.
+         *
+         *     The reading tends to the thickness-weighted mean at low frequency and to the face layer at
+         *     high frequency, but not always from below: a thin good-conductor plating on a poorer
+         *     conductor can read above its own bulk conductivity where the standard depth is about the
+         *     plating thickness (8 µm of copper on zinc reaches some 109 %IACS near δ ≈ 0.8–0.9 × the
+         *     plating). This is physics, not a fault of the fit. The eddy currents, crowded into the
+         *     plating and reflected at its boundary with the poorer layer, give a ΔZ whose point in the
+         *     normalised impedance plane does not lie on the curve of homogeneous plates between the two
+         *     layers' values: the layered stack's curve (Dodd & Deeds, J. Appl. Phys. 39, 2829, 1968,
+         *     and the coated-conductor analyses that followed, e.g. the effective-conductivity
+         *     treatments of plated and clad parts in the eddy-current testing literature) crosses the
+         *     homogeneous reference curve at a point of higher σ, and that is where the nearest
+         *     homogeneous plate sits. A reading above the face's bulk value means δ is near the
+         *     plating's thickness, not that the plating is silver. A stack with a magnetic layer gets a
+         *     `magnetic-layer` warning instead: no non-magnetic plate describes it.
          */
         post: operations["estimateApparentConductivity"];
         delete?: never;
@@ -802,8 +817,16 @@ export interface components {
             fromMemory: boolean;
             /** @description How well the reading (and its density, when given) fits the alloy's ranges within the stated uncertainty: 1 inside both ranges near the nominal, falling towards 0 as the reading lies further outside. It ranks candidates; it is no probability. */
             score: number;
-            /** @description The reading corrected to this alloy's reference temperature. */
+            /** @description The reading corrected to this alloy's reference temperature (with an estimated coefficient, the correction made with the central estimate). */
             correctedConductivitySPerM: number;
+            /** @description Whether and how the reading was corrected to this alloy's reference temperature. `recorded`: with the alloy's own coefficient. `estimated`: no coefficient on record, one estimated by Matthiessen's rule from the base metal (α ≈ α_base·ρ_base/ρ_alloy, up to 1.5 times that and never above the base metal's α); the score compares the whole span the bounds give. `none`: read at the reference temperature, or nothing to estimate from (then the comparison spans α from 0 to 0.007 /K and the score is halved, so that it never ranks as confidently as a corrected one). */
+            correction: {
+                /** @enum {string} */
+                kind: "recorded" | "estimated" | "none";
+                /** @description The coefficient used, 1/K. */
+                alphaPerK?: number;
+                rule?: string;
+            };
             /** @description The alloy's conductivity range at its reference temperature as the score used it (a nominal alone is widened by ±2 %). */
             conductivityRangeSPerM: components["schemas"]["ScoredRange"];
             /** @description The alloy's density range as the score used it; null when the table has none. */
@@ -923,6 +946,16 @@ export interface components {
             /** @enum {string} */
             unit: "V" | "kV";
         };
+        CurrentQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "A" | "kA";
+        };
+        I2tQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "A2s" | "A²s" | "kA2s" | "kA²s";
+        };
         ResistanceQuantity: {
             value: number;
             /** @enum {string} */
@@ -933,10 +966,17 @@ export interface components {
             thickness: components["schemas"]["LengthQuantity"];
         };
         LaunchRequest: {
+            /** @description The capacitor bank; `ratedVoltage` is the capacitor's rated voltage: charged above it, the answer warns `bank-over-rated-voltage`. */
             bank: {
                 capacitance: components["schemas"]["CapacitanceQuantity"];
                 voltage: components["schemas"]["VoltageQuantity"];
                 seriesResistance: components["schemas"]["ResistanceQuantity"];
+                ratedVoltage?: components["schemas"]["VoltageQuantity"];
+            };
+            /** @description The switch's pulse ratings from its datasheet: non-repetitive surge current (I_TSM, a 10 ms half-sine at 50 Hz) and I²t. The pulse's peak current and ∫i²dt are compared with them (`switch-over-rating`). A 10 ms half-sine of peak I has I²t = I²·0.005 A²s. */
+            switch?: {
+                surgeCurrentRating: components["schemas"]["CurrentQuantity"];
+                i2tRating: components["schemas"]["I2tQuantity"];
             };
             coil: components["schemas"]["Coil"];
             blank: {
@@ -958,14 +998,28 @@ export interface components {
             peakCurrentA: number;
             peakCurrentTimeS: number;
             peakForceN: number;
+            /** @description ∫i²dt of the drive current over the pulse, A²s */
+            i2tA2s: number;
             impulseNs: number;
             exitSpeedMPerS: number;
+            /** @description Apex above the starting position: the rise made during the pulse (the displacement where the simulation ends) plus the ballistic rise from the speed there (no drag). */
             heightM: number;
+            /** @description Where the blank comes back to its starting height, from the same trajectory (no drag); 0 for a vertical launcher. */
             rangeM: number;
             efficiency: number;
             massKg: number;
             coilInductanceH: number;
             circuitResistanceOhm: number;
+            /** @description The drive coil as built, with heavy-build magnet wire (NEMA MW 1000 / IEC 60317 grade 2 overall diameters). */
+            coil: {
+                /** @description DC resistance of the winding alone */
+                resistanceOhm: number;
+                inductanceH: number;
+                /** @description Mass of the conductor */
+                wireMassKg: number;
+                /** @description The turns' overall (insulated) cross-sections over the winding window, (outer − inner radius) × length. A coil above π/(2√3) ≈ 0.907, the orthocyclic ideal, cannot be wound and is refused (422 naming /body/coil). */
+                fillFactor: number;
+            };
             energy: {
                 storedJ: number;
                 coilLossJ: number;
@@ -973,6 +1027,8 @@ export interface components {
                 kineticJ: number;
                 /** @description Left on the capacitor, in the field, and as height gained */
                 residualJ: number;
+                /** @description Stored − losses − kinetic − residual: the integration error of the ledger, ideally 0 */
+                imbalanceJ: number;
             };
             series: {
                 timeS: number;
@@ -981,8 +1037,16 @@ export interface components {
                 displacementM: number;
                 speedMPerS: number;
             }[];
-            warnings: string[];
+            warnings: components["schemas"]["Warnings"];
         };
+        /** @description Something a practitioner must know beside the numbers. Codes (ours, stable): `magnetic-layer` (a magnetic material the estimate treats in a way that misleads), `coil-heating` (the winding's adiabatic temperature rise in one pulse, energy over wire mass × 385 J/(kg·K), above the 115 K that thermal class 155 (F) of IEC 60085 allows from a 40 °C ambient), `projectile-hazard` (apex above 2 m or kinetic energy above 1 J), `bank-over-rated-voltage` (charged above the bank's rated voltage), `switch-over-rating` (peak current or ∫i²dt above the switch's surge or I²t rating). */
+        EstimateWarning: {
+            /** @enum {string} */
+            code: "magnetic-layer" | "coil-heating" | "projectile-hazard" | "bank-over-rated-voltage" | "switch-over-rating";
+            message: string;
+        };
+        /** @description Empty when there is nothing to say. */
+        Warnings: components["schemas"]["EstimateWarning"][];
         BuiltInStack: {
             slug: string;
             name: string;
@@ -1353,6 +1417,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: {
                             frequencyHz: number;
                             skinDepthM: number;
@@ -1383,6 +1448,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: components["schemas"]["ImpedancePoint"][];
                     };
                 };
@@ -1410,6 +1476,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        warnings: components["schemas"]["Warnings"];
                         points: {
                             frequencyHz: number;
                             apparentConductivitySPerM: number;

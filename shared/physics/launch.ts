@@ -15,6 +15,15 @@ import {
 } from './maxwell';
 import { integrateRk45, StepLimitError } from './rk45';
 import { stackMass, type Stack } from './stack';
+import {
+  adiabaticRise,
+  HAZARD_HEIGHT_M,
+  HAZARD_KINETIC_J,
+  MAGNETIC_FROM_MU_R,
+  MAX_COIL_RISE_K,
+  type EstimateWarning,
+} from './warnings';
+import { COPPER_DENSITY_KG_PER_M3, fillFactor, heavyBuildDiameter, wireMass } from './winding';
 import { ComputeTimeExceededError } from './apparent-conductivity';
 
 export interface CapacitorBank {
@@ -22,11 +31,38 @@ export interface CapacitorBank {
   voltageV: number;
   /** Switch, leads and capacitor ESR, Ω; the winding's own resistance is added to it. */
   seriesResistanceOhm: number;
+  /** The capacitor's rated voltage, V: charging above it raises `bank-over-rated-voltage`. */
+  ratedVoltageV?: number;
+}
+
+/**
+ * A thyristor's or triac's pulse ratings: the non-repetitive surge current I_TSM (for a 10 ms
+ * half-sine at 50 Hz, or 8.3 ms at 60 Hz) and the I²t for fusing; the pulse's peak current and
+ * ∫i²dt are compared with them (`switch-over-rating`).
+ */
+export interface SwitchRating {
+  surgeCurrentA: number;
+  i2tA2s: number;
 }
 
 export interface DriveCoil extends CoilGeometry {
+  /** Bare diameter of the wire, m. */
   wireDiameterM: number;
   conductorSPerM: number;
+  /** Overall diameter over the insulation, m; heavy-build magnet wire when not given. */
+  overallDiameterM?: number;
+  /** Density of the conductor, kg/m³; annealed copper when not given. */
+  conductorDensityKgPerM3?: number;
+}
+
+/** The drive coil as built: its winding's own figures. */
+export interface CoilReport {
+  /** DC resistance of the winding alone, Ω. */
+  resistanceOhm: number;
+  inductanceH: number;
+  wireMassKg: number;
+  /** Overall wire cross-sections over the window area (winding.ts). */
+  fillFactor: number;
 }
 
 export interface FilamentCounts {
@@ -44,6 +80,7 @@ export interface LaunchInput {
   blank: Stack;
   /** Coil face to blank face, m. */
   gapM: number;
+  switchRating?: SwitchRating;
   /** Elevation of the launcher's axis above horizontal, degrees (90: straight up). */
   launchAngleDeg: number;
   filaments?: Partial<FilamentCounts>;
@@ -64,6 +101,8 @@ export interface LaunchResult {
   peakCurrentA: number;
   peakCurrentTimeS: number;
   peakForceN: number;
+  /** ∫i²dt of the drive current over the pulse, A²s. */
+  i2tA2s: number;
   impulseNs: number;
   exitSpeedMPerS: number;
   heightM: number;
@@ -73,6 +112,7 @@ export interface LaunchResult {
   coilInductanceH: number;
   circuitResistanceOhm: number;
   endTimeS: number;
+  coil: CoilReport;
   energy: {
     storedJ: number;
     coilLossJ: number;
@@ -82,8 +122,8 @@ export interface LaunchResult {
     imbalanceJ: number;
   };
   series: LaunchSeriesPoint[];
-  /** What the model leaves out for this blank, in plain words. */
-  warnings: string[];
+  /** What a bench builder must know beside the numbers (warnings.ts). */
+  warnings: EstimateWarning[];
 }
 
 export const DEFAULT_FILAMENTS: FilamentCounts = {
@@ -284,7 +324,9 @@ function invert(matrix: Float64Array, n: number): Float64Array {
  * 0.01 % of the stored energy and the force is below a thousandth of its peak, or the blank is
  * three coil radii away). Mutuals by Maxwell,
  * self-inductances by the thin-ring formula. The blank rests on the coil face until the force
- * lifts it. No air drag; height and range are those of a point mass at the exit speed.
+ * lifts it. No air drag; height and range are those of a point mass leaving from where the
+ * simulation ends, at the speed it has there ({@link ballistics}): the apex counts the rise made
+ * during the pulse.
  */
 export function simulateLaunch(input: LaunchInput): LaunchResult {
   const counts = { ...DEFAULT_FILAMENTS, ...input.filaments };
@@ -306,8 +348,8 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     'give more coil filaments (filaments.coilRadial, filaments.coilAxial), or a winding section small against its radius',
   );
   const l1 = selfInductanceFromFilaments(coilCells);
-  const r1 =
-    bank.seriesResistanceOhm + windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
+  const windingOhm = windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
+  const r1 = bank.seriesResistanceOhm + windingOhm;
   const pulseHz = 1 / (2 * Math.PI * Math.sqrt(l1 * bank.capacitanceF));
   const slices = blankSlices(
     blank,
@@ -526,19 +568,46 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   const residual = (0.5 * y[iq]! ** 2) / bank.capacitanceF + magnetic + mass * gAxis * y[is]!;
   const coilLoss = y[iec]!;
   const blankLoss = y[ieb]!;
+  const wireMassKg = wireMass(
+    coil,
+    coil.wireDiameterM,
+    coil.conductorDensityKgPerM3 ?? COPPER_DENSITY_KG_PER_M3,
+  );
+  const { heightM, rangeM } = ballistics(y[is]!, speed, theta);
+  // The coil-side loss is ∫r1·i1²dt with r1 constant: the let-through integral follows exactly.
+  const i2tA2s = coilLoss / r1;
+  const warnings = launchWarnings({
+    bank,
+    switchRating: input.switchRating,
+    peakCurrentA: peakCurrent,
+    i2tA2s,
+    blank,
+    windingLossJ: (coilLoss * windingOhm) / r1,
+    wireMassKg,
+    heightM,
+    speedMPerS: speed,
+    kineticJ: kinetic,
+  });
   return {
     peakCurrentA: peakCurrent,
     peakCurrentTimeS: peakCurrentTime,
     peakForceN: peakForce,
+    i2tA2s,
     impulseNs: y[iimp]!,
     exitSpeedMPerS: speed,
-    heightM: (speed * Math.sin(theta)) ** 2 / (2 * STANDARD_GRAVITY),
-    rangeM: (speed * speed * Math.sin(2 * theta)) / STANDARD_GRAVITY,
+    heightM,
+    rangeM,
     efficiency: kinetic / stored,
     massKg: mass,
     coilInductanceH: l1,
     circuitResistanceOhm: r1,
     endTimeS: endTime,
+    coil: {
+      resistanceOhm: windingOhm,
+      inductanceH: l1,
+      wireMassKg,
+      fillFactor: fillFactor(coil, coil.overallDiameterM ?? heavyBuildDiameter(coil.wireDiameterM)),
+    },
     energy: {
       storedJ: stored,
       coilLossJ: coilLoss,
@@ -548,12 +617,92 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       imbalanceJ: stored - coilLoss - blankLoss - kinetic - residual,
     },
     series: thin(samples, input.seriesPoints ?? 300),
-    warnings: blank.layers.some((l) => l.relativePermeability > 1.05)
-      ? [
-          'A layer is magnetic: the model treats it as non-magnetic. A ferromagnetic blank is also pulled toward the coil, so it flies lower than shown, or not at all.',
-        ]
-      : [],
+    warnings,
   };
+}
+
+const figure = (x: number) => Number(x.toPrecision(3));
+
+/**
+ * Apex and range of a point mass (no drag) that is `displacementM` along the launcher's axis from
+ * its starting position, moving along it at `speedMPerS`, the axis at `theta` above horizontal:
+ * apex = s·sin θ + (v·sin θ)²/2g above the start, the rise made during the pulse included;
+ * range = s·cos θ + v·cos θ·t, where t solves s·sin θ + v·sin θ·t − g·t²/2 = 0 (landing at the
+ * starting height). Projectile motion in uniform gravity (any mechanics text).
+ * @example ballistics(0.01, 2, Math.PI / 2) // { heightM: 0.2139…, rangeM: ~0 }
+ */
+export function ballistics(
+  displacementM: number,
+  speedMPerS: number,
+  theta: number,
+): { heightM: number; rangeM: number } {
+  const g = STANDARD_GRAVITY;
+  const y0 = displacementM * Math.sin(theta);
+  const vy = speedMPerS * Math.sin(theta);
+  const vx = speedMPerS * Math.cos(theta);
+  const flight = (vy + Math.sqrt(vy * vy + 2 * g * Math.max(0, y0))) / g;
+  return {
+    heightM: y0 + (vy * vy) / (2 * g),
+    rangeM: displacementM * Math.cos(theta) + vx * flight,
+  };
+}
+
+/**
+ * The warnings of one launch: a magnetic layer the model treats as non-magnetic; the winding's
+ * adiabatic temperature rise above its insulation class (IEC 60085, warnings.ts); a blank that
+ * rises above head height or leaves with more than 1 J.
+ */
+function launchWarnings(l: {
+  bank: CapacitorBank;
+  switchRating: SwitchRating | undefined;
+  peakCurrentA: number;
+  i2tA2s: number;
+  blank: Stack;
+  windingLossJ: number;
+  wireMassKg: number;
+  heightM: number;
+  speedMPerS: number;
+  kineticJ: number;
+}): EstimateWarning[] {
+  const warnings: EstimateWarning[] = [];
+  if (l.blank.layers.some((layer) => layer.relativePermeability > MAGNETIC_FROM_MU_R))
+    warnings.push({
+      code: 'magnetic-layer',
+      message:
+        'A layer is magnetic: the model treats it as non-magnetic. A ferromagnetic blank is also pulled toward the coil, so it flies lower than shown, or not at all.',
+    });
+  const rise = adiabaticRise(l.windingLossJ, l.wireMassKg);
+  if (rise > MAX_COIL_RISE_K)
+    warnings.push({
+      code: 'coil-heating',
+      message: `The winding heats by about ${figure(rise)} K in one pulse (${figure(l.windingLossJ)} J in ${figure(l.wireMassKg * 1e3)} g of copper, adiabatic), above the ${MAX_COIL_RISE_K} K that thermal class 155 (F) insulation (IEC 60085) allows from a 40 °C ambient: the enamel chars and the turns short.`,
+    });
+  if (l.heightM > HAZARD_HEIGHT_M || l.kineticJ > HAZARD_KINETIC_J)
+    warnings.push({
+      code: 'projectile-hazard',
+      message: `The blank rises ${figure(l.heightM)} m and leaves at ${figure(l.speedMPerS)} m/s with ${figure(l.kineticJ)} J: above head height (${HAZARD_HEIGHT_M} m) or ${HAZARD_KINETIC_J} J it can injure an eye or a face. Shield the bench and wear eye protection.`,
+    });
+  const rated = l.bank.ratedVoltageV;
+  if (rated !== undefined && l.bank.voltageV > rated)
+    warnings.push({
+      code: 'bank-over-rated-voltage',
+      message: `The bank is charged to ${figure(l.bank.voltageV)} V, above its rated ${figure(rated)} V (${figure((l.bank.voltageV / rated - 1) * 100)} % over): outside the capacitor's datasheet, whatever the result; it may fail short or vent.`,
+    });
+  const sw = l.switchRating;
+  if (sw && (l.peakCurrentA > sw.surgeCurrentA || l.i2tA2s > sw.i2tA2s)) {
+    const over: string[] = [];
+    if (l.peakCurrentA > sw.surgeCurrentA)
+      over.push(
+        `a peak of ${figure(l.peakCurrentA)} A against its ${figure(sw.surgeCurrentA)} A surge rating`,
+      );
+    if (l.i2tA2s > sw.i2tA2s)
+      over.push(`∫i²dt of ${figure(l.i2tA2s)} A²s against its ${figure(sw.i2tA2s)} A²s I²t rating`);
+    warnings.push({
+      code: 'switch-over-rating',
+      message: `The switch is over its ratings: ${over.join(' and ')}. A thyristor's surge rating is for one 10 ms half-sine; beyond it the junction can fail short.`,
+    });
+  }
+  return warnings;
 }
 
 /** Keeps about `count` samples, evenly spaced in time, always the first and the last. */

@@ -43,6 +43,15 @@ describe('POST /api/v1/estimates/skin-depth', () => {
     expect(res.status).toBe(200);
     expect(res.body.points[0].skinDepthM).toBeCloseTo(8.53e-3, 5);
     expect(res.body.points[1].skinDepthM).toBeCloseTo(66.1e-6, 7);
+    expect(res.body.warnings).toEqual([]);
+  });
+  it('a magnetic material → a magnetic-layer warning about its µr (issue 10)', async () => {
+    const res = await post('skin-depth', {
+      material: { alloy: 'steel-1008' },
+      frequencies: [{ value: 10, unit: 'kHz' }],
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['magnetic-layer']);
   });
   it('an alloy of the table by slug works; an unknown one → 400 naming it', async () => {
     const ok = await post('skin-depth', {
@@ -70,6 +79,7 @@ describe('POST /api/v1/estimates/impedance', () => {
       frequencies: [{ value: 900, unit: 'Hz' }],
     });
     expect(res.status).toBe(200);
+    expect(res.body.warnings).toEqual([]);
     const [p] = res.body.points;
     expect(p.coilInAir.inductanceH / 225.9e-3).toBeCloseTo(1, 2);
     expect(p.overConductor.inductanceH / 178.63e-3).toBeCloseTo(1, 2);
@@ -121,6 +131,44 @@ describe('POST /api/v1/estimates/apparent-conductivity', () => {
     expect(mid.apparentPercentIacs).toBeGreaterThan(low.apparentPercentIacs);
     expect(high.apparentPercentIacs).toBeGreaterThan(mid.apparentPercentIacs);
     expect(res.body.limits.surfaceLayerSPerM).toBeCloseTo(101 * 0.58e6, 0);
+    expect(res.body.warnings).toEqual([]);
+  });
+  it('a thin copper plating reads above its own bulk conductivity near δ ≈ its thickness (documented overshoot, issue 10)', async () => {
+    // 50 µm of copper (101 %IACS, the table's C11000) on zinc: δ at 2 MHz is 46 µm (physics.md's
+    // formula), 0.93 × the plating. Layered stack's curve crosses the homogeneous one at a higher σ.
+    const res = await post('apparent-conductivity', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [
+        { material: copper, thickness: um(50) },
+        { material: zinc, thickness: mm(1.34) },
+      ],
+      frequencies: [
+        { value: 2, unit: 'MHz' },
+        { value: 50, unit: 'MHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const [near, far] = res.body.points;
+    expect(near.apparentPercentIacs).toBeGreaterThan(105);
+    // Far above, where δ ≪ the plating, it comes back to the face layer's value.
+    expect(far.apparentPercentIacs).toBeCloseTo(101, 0);
+  });
+  it('bare low-carbon steel → a magnetic-layer warning saying how far the fit misses (issue 10)', async () => {
+    const res = await post('apparent-conductivity', {
+      coil: SENSOR_COIL,
+      liftOff: mm(0.5),
+      layers: [{ material: { alloy: 'steel-1008' }, thickness: mm(1.5) }],
+      frequencies: [
+        { value: 10, unit: 'kHz' },
+        { value: 100, unit: 'kHz' },
+      ],
+    });
+    expect(res.status).toBe(200);
+    const worst = Math.max(...res.body.points.map((p: { fitResidual: number }) => p.fitResidual));
+    expect(res.body.warnings).toHaveLength(1);
+    expect(res.body.warnings[0].code).toBe('magnetic-layer');
+    expect(res.body.warnings[0].message).toContain(`fitResidual ${Number(worst.toPrecision(2))}`);
   });
 });
 
@@ -150,6 +198,28 @@ describe('POST /api/v1/estimates/launch', () => {
       Math.abs(e.storedJ - e.coilLossJ - e.blankLossJ - e.kineticJ - e.residualJ) / e.storedJ,
     ).toBeLessThan(0.01);
     expect(res.body.series.length).toBeGreaterThan(10);
+    expect(res.body.warnings).toEqual([]);
+    expect(Math.abs(e.imbalanceJ) / e.storedJ).toBeLessThan(1e-6);
+    // The apex counts the rise during the pulse: above the final-speed-only v²/2g (issue 10).
+    expect(res.body.heightM).toBeGreaterThan(res.body.exitSpeedMPerS ** 2 / (2 * 9.80665));
+  });
+  it('at 5 kV: coil-heating and projectile-hazard warnings with their figures (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, voltage: { value: 5, unit: 'kV' } },
+    });
+    expect(res.status).toBe(200);
+    const codes = res.body.warnings.map((w: { code: string }) => w.code);
+    expect(codes).toEqual(['coil-heating', 'projectile-hazard']);
+    // Winding's share of the circuit's loss over (wire mass × 385 J/(kg·K), copper, CRC).
+    const c = res.body.coil;
+    const windingJ = (res.body.energy.coilLossJ * c.resistanceOhm) / res.body.circuitResistanceOhm;
+    const rise = windingJ / (c.wireMassKg * 385);
+    // Above 155 − 40 = 115 K: IEC 60085 thermal class 155 (F) from IEC 60034-1's 40 °C ambient.
+    expect(rise).toBeGreaterThan(115);
+    expect(res.body.warnings[0].message).toContain(`${Number(rise.toPrecision(3))} K`);
+    expect(res.body.warnings[0].message).toMatch(/IEC 60085/);
+    expect(res.body.warnings[1].message).toContain(`${Number(res.body.heightM.toPrecision(3))} m`);
   });
   it('a range for an angled launcher', async () => {
     const res = await post('launch', { ...launch, launchAngleDeg: 45 });
@@ -164,6 +234,95 @@ describe('POST /api/v1/estimates/launch', () => {
       },
     });
     expectProblem(res, 400, '/body/blank/layers/0/material/density');
+  });
+  it('reports the winding: DC resistance, inductance, wire mass and fill (issue 10)', async () => {
+    const res = await post('launch', launch);
+    const coil = res.body.coil;
+    // 100 turns × 2π × 8.5 mm of AWG 26 (0.405 mm bare, ASTM B258) at 58 MS/m (IEC 60028):
+    // 5.341 m / (58e6 × 1.288e-7 m²) = 0.715 Ω (arithmetic).
+    expect(coil.resistanceOhm).toBeCloseTo(0.715, 3);
+    expect(coil.inductanceH).toBe(res.body.coilInductanceH);
+    // 5.341 m × 1.2876e-7 m² × 8890 kg/m³ (C11000, ASM Handbook Vol. 2) = 6.113 g (arithmetic).
+    expect(coil.wireMassKg).toBeCloseTo(6.113e-3, 6);
+    // 100 × π/4 × (0.450 mm, heavy build after NEMA MW 1000, recalled)² / 70 mm² (arithmetic).
+    expect(coil.fillFactor).toBeCloseTo(0.227, 3);
+  });
+  it('a coil that cannot be wound → 422 naming /body/coil with the numbers (issue 10)', async () => {
+    // 100 turns of AWG 14 in a 3.2 × 3.2 mm window: the issue's review had it accepted (620 mm).
+    const res = await post('launch', {
+      ...launch,
+      coil: { innerRadius: mm(5), outerRadius: mm(8.2), length: mm(3.2), turns: 100, awg: 14 },
+    });
+    expectProblem(res, 422, '/body/coil');
+    // AWG 14 is 1.628 mm bare (ASTM B258), 1.707 mm over heavy build (NEMA MW 1000: 0.0671 in,
+    // recalled); orthocyclic cells of √3/2·D² each: 100 × 2.52 mm² = 252 mm² (arithmetic).
+    expect(res.body.detail).toMatch(
+      /100 turns of AWG 14 \(1\.71 mm over heavy-build insulation\) need 252 mm² of window even wound orthocyclically; this coil has 10\.2 mm²/,
+    );
+  });
+  it('a coil wound just within the orthocyclic ideal is accepted; with no wire given, it fills in square packing', async () => {
+    const res = await post('launch', {
+      ...launch,
+      coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100 },
+    });
+    expect(res.status).toBe(200);
+    // The wire whose overall diameter fills the window in square packing: fill π/4 (geometry).
+    expect(res.body.coil.fillFactor).toBeCloseTo(Math.PI / 4, 9);
+  });
+  it('returns ∫i²dt; a switch within its ratings and a bank within its rated voltage → no warning (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, ratedVoltage: { value: 450, unit: 'V' } },
+      // A small 25 A thyristor of the common TO-220 kind: I_TSM of a few hundred amperes and
+      // an I²t of a few hundred A²s (common practice, no source).
+      switch: {
+        surgeCurrentRating: { value: 300, unit: 'A' },
+        i2tRating: { value: 450, unit: 'A2s' },
+      },
+    });
+    expect(res.status).toBe(200);
+    const r = res.body;
+    // The coil-side loss is ∫r1·i²dt with r1 constant, so ∫i²dt = loss / r1 (arithmetic).
+    expect(r.i2tA2s).toBeCloseTo(r.energy.coilLossJ / r.circuitResistanceOhm, 9);
+    // A pulse of ~200 A over tens of µs lets through far less than a 10 ms half-sine of the same
+    // peak, I²·0.005 A²s (physics.md, arithmetic).
+    expect(r.i2tA2s).toBeLessThan(r.peakCurrentA ** 2 * 0.005);
+    expect(r.warnings).toEqual([]);
+  });
+  it('a switch over its surge and I²t ratings and a bank over its rated voltage → warnings with the figures (issue 10)', async () => {
+    const res = await post('launch', {
+      ...launch,
+      bank: { ...launch.bank, ratedVoltage: { value: 350, unit: 'V' } },
+      switch: {
+        surgeCurrentRating: { value: 0.1, unit: 'kA' },
+        i2tRating: { value: 1, unit: 'A²s' },
+      },
+    });
+    expect(res.status).toBe(200);
+    const byCode = Object.fromEntries(
+      res.body.warnings.map((w: { code: string; message: string }) => [w.code, w.message]),
+    );
+    expect(Object.keys(byCode)).toEqual(['bank-over-rated-voltage', 'switch-over-rating']);
+    expect(byCode['bank-over-rated-voltage']).toContain('charged to 400 V, above its rated 350 V');
+    expect(byCode['switch-over-rating']).toContain(
+      `a peak of ${Number(res.body.peakCurrentA.toPrecision(3))} A against its 100 A surge rating`,
+    );
+    expect(byCode['switch-over-rating']).toContain(
+      `∫i²dt of ${Number(res.body.i2tA2s.toPrecision(3))} A²s against its 1 A²s I²t rating`,
+    );
+  });
+  it('a rating in an unknown unit → 400 naming it', async () => {
+    expectProblem(
+      await post('launch', {
+        ...launch,
+        switch: {
+          surgeCurrentRating: { value: 100, unit: 'mA' },
+          i2tRating: { value: 1, unit: 'A2s' },
+        },
+      }),
+      400,
+      '/body/switch/surgeCurrentRating/unit',
+    );
   });
   it('both a wire diameter and an AWG → 400', async () => {
     expectProblem(

@@ -75,4 +75,72 @@ describe('POST /api/v1/match', () => {
     expect(res.status).toBe(200);
     expect(res.body.candidates).toEqual([]);
   });
+  describe('every alloy on the same footing (issue 10)', () => {
+    type Candidate = {
+      slug: string;
+      uns: string | null;
+      score: number;
+      correction: { kind: string; alphaPerK?: number; rule?: string };
+      reasons: string[];
+    };
+    const candidates = async (body: object): Promise<Candidate[]> => {
+      const res = await match(body);
+      expect(res.status).toBe(200);
+      return res.body.candidates as Candidate[];
+    };
+
+    it('Ni 200 read at 60 °C (14.6 %IACS, 8.89 g/cm³) → nickel first, with an estimated coefficient', async () => {
+      // 14.6 %IACS = the table's 18.1 %IACS (ASM Handbook Vol. 2) warmed by 40 K with pure nickel's
+      // α20 = 0.0060 /K (common tables of coefficients, recalled): 18.1 / 1.24 = 14.6, the figure
+      // the issue's review used. Before issue 10: phosphor bronze first (0.96), nickel absent.
+      const list = await candidates({
+        conductivity: { value: 14.6, unit: '%IACS' },
+        temperature: { value: 60, unit: 'C' },
+        density: { value: 8.89, unit: 'g/cm3' },
+      });
+      expect(list[0]!.slug).toBe('nickel-200');
+      expect(list[0]!.correction.kind).toBe('estimated');
+      expect(list[0]!.correction.rule).toMatch(/Matthiessen/);
+      // Matthiessen: 0.0060 × 6.99 µΩ·cm / 9.53 µΩ·cm = 0.0044 /K (arithmetic on the recalled figures).
+      expect(list[0]!.correction.alphaPerK).toBeCloseTo(0.0044, 4);
+      expect(list[0]!.reasons[0]).toMatch(/no temperature coefficient on record: estimated/);
+      const bronze = list.find((c) => c.slug === 'phosphor-bronze-c51000')!;
+      expect(bronze.correction).toEqual({ kind: 'recorded', alphaPerK: 0.000592 });
+    });
+
+    it('titanium grade 2 read at 60 °C → titanium grade 2 found', async () => {
+      // The table's 56 µΩ·cm (ASM Handbook Vol. 2) warmed by 40 K with pure titanium's α20 =
+      // 0.0038 /K (CRC Handbook, as in the table): 64.5 µΩ·cm = 2.67 %IACS. Before: no candidate.
+      const list = await candidates({
+        conductivity: { value: 172.41 / (56 * (1 + 0.0038 * 40)), unit: '%IACS' },
+        temperature: { value: 60, unit: 'C' },
+        density: { value: 4.51, unit: 'g/cm3' },
+      });
+      expect(list[0]!.slug).toBe('titanium-grade-2');
+      expect(list[0]!.correction.kind).toBe('estimated');
+      expect(list[0]!.correction.rule).toMatch(/from titanium-pure/);
+    });
+
+    // Cartridge brass 28 %IACS at 20 °C (CDA, as in the table) read warm or cold with brass's
+    // α20 ≈ 0.0015 /K (common tables of coefficients for brass, recalled), a coefficient other than
+    // the table's own 0.0011 /K, so the test does not simply invert the correction.
+    it.each([
+      [60, 28 / (1 + 0.0015 * 40)],
+      [-10, 28 / (1 - 0.0015 * 30)],
+    ])('cartridge brass read at %d °C → C26000 in the top three', async (celsius, value) => {
+      const list = await candidates({
+        conductivity: { value, unit: '%IACS' },
+        temperature: { value: celsius, unit: 'C' },
+        density: { value: 8.53, unit: 'g/cm3' },
+      });
+      expect(list.slice(0, 3).map((c) => c.uns)).toContain('C26000');
+      expect(list.find((c) => c.uns === 'C26000')!.correction.kind).toBe('recorded');
+    });
+
+    it('a reading at the reference temperature says nothing was corrected', async () => {
+      const list = await candidates({ conductivity: { value: 28, unit: '%IACS' } });
+      expect(list[0]!.correction.kind).toBe('none');
+      expect(list[0]!.correction.rule).toMatch(/nothing to correct/);
+    });
+  });
 });

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAlloyRepository } from '../../backend/db/alloy-repository';
 import { matchReading } from '../../backend/services/match';
 import type { AlloyRecord } from '../../shared/catalogue/alloy-record';
-import { scoreCandidate } from '../../shared/match/score';
+import { scoreCandidate, UNCORRECTED_WEIGHT } from '../../shared/match/score';
+import { baseMetalsFrom, estimateAlpha } from '../../shared/match/temperature-estimate';
 import { createTestDatabase } from '../helpers/test-app';
 import type { Knex } from 'knex';
 
@@ -163,5 +164,60 @@ describe('matchReading on the seeded table', () => {
     expect(
       matchReading(alloys, { conductivitySPerM: iacs(500), uncertaintyPercent: 2 }, 10),
     ).toEqual([]);
+  });
+});
+
+describe("temperature coefficients estimated by Matthiessen's rule", () => {
+  const base = {
+    element: 'Cu',
+    resistivityOhmM: 1 / iacs(100),
+    alphaPerK: 0.00393,
+    from: 'copper',
+  };
+
+  it('α_alloy = α_base·ρ_base/ρ_alloy, bounded above by 1.5× and by the base metal', () => {
+    // Copper α20 = 0.00393 /K (IEC 60028); a 25 %IACS alloy: 0.00393 × 25 / 100 (arithmetic).
+    const e = estimateAlpha(1 / iacs(25), base);
+    expect(e.alphaPerK).toBeCloseTo(0.0009825, 9);
+    expect(e.highPerK).toBeCloseTo(1.5 * 0.0009825, 7);
+    // A nearly pure metal cannot exceed its base's own α.
+    expect(estimateAlpha(1 / iacs(95), base).highPerK).toBe(0.00393);
+  });
+
+  it('an alloy with no coefficient is estimated from its main element; with no base, halved', () => {
+    const noAlpha = alloy({
+      sigma: [iacs(28), iacs(27), iacs(29)],
+      composition: { Cu: 70, Zn: 30 },
+    });
+    const warm = { conductivitySPerM: iacs(26.8), temperatureK: 333.15, uncertaintyPercent: 2 };
+    const bases = new Map([['Cu', base]]);
+    const estimated = scoreCandidate(warm, noAlpha, bases)!;
+    expect(estimated.correction.kind).toBe('estimated');
+    const none = scoreCandidate(warm, noAlpha, new Map())!;
+    expect(none.correction.kind).toBe('none');
+    expect(none.score).toBeLessThanOrEqual(UNCORRECTED_WEIGHT);
+    expect(none.score).toBeLessThan(estimated.score);
+    const recorded = scoreCandidate(warm, {
+      ...noAlpha,
+      ...alloy({ sigma: [iacs(28), iacs(27), iacs(29)], alpha: 0.0011 }),
+    })!;
+    expect(recorded.correction).toEqual({ kind: 'recorded', alphaPerK: 0.0011 });
+  });
+
+  it('base metals come from the purest row of each element that has a coefficient', () => {
+    const cu = alloy({
+      sigma: [iacs(101), iacs(100), iacs(101.5)],
+      alpha: 0.00393,
+      composition: { Cu: 99.9 },
+      slug: 'cu',
+    });
+    const brass = alloy({
+      sigma: [iacs(28), iacs(27), iacs(29)],
+      alpha: 0.0011,
+      composition: { Cu: 70, Zn: 30 },
+    });
+    const bases = baseMetalsFrom([brass, cu]);
+    expect(bases.get('Cu')).toMatchObject({ from: 'cu', alphaPerK: 0.00393 });
+    expect(bases.get('Ni')?.from).toMatch(/recalled/);
   });
 });

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import fixture from '../../fixtures/physics/launch.json';
 import { awgDiameter } from '../../../shared/physics/awg';
-import { simulateLaunch, type LaunchInput } from '../../../shared/physics/launch';
+import { ballistics, simulateLaunch, type LaunchInput } from '../../../shared/physics/launch';
+import { STANDARD_GRAVITY } from '../../../shared/physics/constants';
 import type { StackLayer } from '../../../shared/physics/stack';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
@@ -67,9 +68,12 @@ describe('pulsed launch properties', () => {
     expect(solid.impulseNs).toBeGreaterThan(0);
   });
 
-  it('throws with a range of zero when launched straight up, and the height from the exit speed', () => {
+  it('throws with a range of zero when launched straight up, and the height from where it ends', () => {
     expect(solid.rangeM).toBeCloseTo(0, 12);
-    expect(solid.heightM).toBeCloseTo(solid.exitSpeedMPerS ** 2 / (2 * 9.80665), 12);
+    expect(solid.heightM).toBeCloseTo(
+      solid.series.at(-1)!.displacementM + solid.exitSpeedMPerS ** 2 / (2 * 9.80665),
+      12,
+    );
     const angled = simulateLaunch({ ...base, launchAngleDeg: 45 });
     expect(angled.rangeM).toBeGreaterThan(0);
   });
@@ -82,7 +86,7 @@ describe('pulsed launch properties', () => {
         layers: [{ ...layer(12, 7870, 1.6e-3), relativePermeability: 100 }],
       },
     });
-    expect(steel.warnings[0]).toMatch(/magnetic/);
+    expect(steel.warnings[0]).toMatchObject({ code: 'magnetic-layer', message: /magnetic/ });
   });
 });
 
@@ -110,6 +114,36 @@ describe('trade facts (common practice, no source)', () => {
       },
     });
     expect(copper.heightM / platedZinc.heightM).toBeGreaterThan(2.5);
+  });
+});
+
+describe('apex height including the rise during the pulse (issue 10)', () => {
+  const g = STANDARD_GRAVITY;
+  it('ballistics: from the start it is the textbook v²sin²θ/2g and v²sin 2θ/g (projectile motion)', () => {
+    const b = ballistics(0, 3, Math.PI / 4);
+    expect(b.heightM).toBeCloseTo((9 * 0.5) / (2 * g), 12);
+    expect(b.rangeM).toBeCloseTo(9 / g, 12);
+  });
+  it('ballistics: from a raised point, the apex adds the rise and the range lands at the start height', () => {
+    const theta = Math.PI / 6;
+    const b = ballistics(0.02, 3, theta);
+    expect(b.heightM).toBeCloseTo(0.02 * 0.5 + (1.5 * 1.5) / (2 * g), 12);
+    // The landing point: y(t) = 0.01 + 1.5t − g t²/2 = 0 and x = 0.02 cos θ + 3 cos θ · t.
+    const t = (1.5 + Math.sqrt(2.25 + 2 * g * 0.01)) / g;
+    expect(b.rangeM).toBeCloseTo(0.02 * Math.cos(theta) + 3 * Math.cos(theta) * t, 12);
+  });
+  it('the old (final-speed-only) height is smaller; the difference is the rise during the pulse', () => {
+    const old = solid.exitSpeedMPerS ** 2 / (2 * g);
+    const rise = solid.series.at(-1)!.displacementM;
+    expect(rise).toBeGreaterThan(0);
+    expect(solid.heightM).toBeGreaterThan(old);
+    expect(solid.heightM - old).toBeCloseTo(rise, 12);
+  });
+  it('an angled launch: range from the same trajectory, longer than the from-the-start formula', () => {
+    const angled = simulateLaunch({ ...base, launchAngleDeg: 45 });
+    const v = angled.exitSpeedMPerS;
+    expect(angled.rangeM).toBeGreaterThan((v * v) / g);
+    expect(angled.heightM).toBeGreaterThan((v * v) / (4 * g));
   });
 });
 

@@ -47,7 +47,7 @@ self.onmessage = (event: MessageEvent<CompareRequest>) => {
       try {
         const launch = simulateLaunch({ ...request.launch, blank: stack, launchAngleDeg: 90 });
         launchHeightM = launch.heightM;
-        launchWarning = launch.warnings[0] ?? null;
+        launchWarning = launch.warnings[0]?.message ?? null;
       } catch (error) {
         launchWarning = error instanceof Error ? error.message : String(error);
       }

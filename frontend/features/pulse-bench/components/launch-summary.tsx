@@ -77,8 +77,8 @@ export function LaunchSummary({ result, name }: { result: LaunchResult; name: st
         </table>
       </div>
       {result.warnings.map((w) => (
-        <p key={w} className="text-sm text-copper-700">
-          {w}
+        <p key={w.code} className="text-sm text-copper-700">
+          {w.message}
         </p>
       ))}
     </section>
