@@ -8,6 +8,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
+import { FiguresTable } from '../../../components/figures-table';
 import { seriesColours } from '../../../lib/chart-format';
 import type { UsageRow } from '../api/keys';
 
@@ -71,44 +72,19 @@ export function UsageChart({ rows, from }: { rows: UsageRow[]; from: string }) {
               </BarChart>
             </ResponsiveContainer>
           </div>
-          <details className="mt-2 text-sm">
-            <summary className="cursor-pointer text-patina-700">
-              The requests per day, as a table
-            </summary>
-            <div className="overflow-x-auto">
-              <table className="mt-1 w-full text-right tabular-nums">
-                <caption className="sr-only">Requests per day by route group, last 30 days</caption>
-                <thead>
-                  <tr>
-                    <th scope="col" className="pr-3 text-left">
-                      Day
-                    </th>
-                    {groups.map((g) => (
-                      <th key={g} scope="col" className="pr-3">
-                        {g}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
-                <tbody>
-                  {days
-                    .filter((d) => groups.some((g) => Number(d[g] ?? 0) > 0))
-                    .map((d) => (
-                      <tr key={String(d.day)}>
-                        <th scope="row" className="pr-3 text-left font-normal">
-                          {d.day}
-                        </th>
-                        {groups.map((g) => (
-                          <td key={g} className="pr-3">
-                            {d[g]}
-                          </td>
-                        ))}
-                      </tr>
-                    ))}
-                </tbody>
-              </table>
-            </div>
-          </details>
+          <FiguresTable
+            summary="The requests per day, as a table"
+            caption="Requests per day by route group, last 30 days"
+            corner="Day"
+            columns={groups}
+            rows={days
+              .filter((d) => groups.some((g) => Number(d[g] ?? 0) > 0))
+              .map((d) => ({
+                key: String(d.day),
+                label: d.day,
+                cells: groups.map((g) => d[g]),
+              }))}
+          />
         </>
       )}
     </figure>

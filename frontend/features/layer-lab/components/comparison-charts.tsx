@@ -10,6 +10,7 @@ import {
   YAxis,
 } from 'recharts';
 import { unitLabel } from '../../../../shared/units/codes';
+import { FiguresTable } from '../../../components/figures-table';
 import {
   decadeTicks,
   domainIncluding,
@@ -168,66 +169,35 @@ export function ApparentConductivityChart({
         (high-frequency limit). Dotted vertical: where the standard depth equals the face
         layer&apos;s thickness. The axis spans every curve and every limit line.
       </p>
-      <details className="mt-2 text-sm">
-        <summary className="cursor-pointer text-patina-700">
-          The figures plotted, as a table
-        </summary>
-        <div className="overflow-x-auto">
-          <table className="mt-1 w-full text-right tabular-nums">
-            <caption className="sr-only">
-              {title} in {label}, at the decades of the sweep, and the limits
-            </caption>
-            <thead>
-              <tr>
-                <th scope="col" className="pr-3 text-left">
-                  Frequency
-                </th>
-                {results.map((r) => (
-                  <th key={r.id} scope="col" className="pr-3">
-                    {r.name}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {samples.map((i) => (
-                <tr key={i}>
-                  <th scope="row" className="pr-3 text-left font-normal">
-                    {formatHertz(frequencies[i]!)}
-                  </th>
-                  {results.map((r) => (
-                    <td key={r.id} className="pr-3">
-                      {formatConductivity(r.points[i]!.apparentConductivitySPerM, unit)}
-                    </td>
-                  ))}
-                </tr>
-              ))}
-              <tr>
-                <th scope="row" className="pr-3 text-left font-normal">
-                  Low-frequency limit (thickness-weighted mean)
-                </th>
-                {results.map((r) => (
-                  <td key={r.id} className="pr-3">
-                    {r.limits.thicknessWeightedMeanSPerM !== null
-                      ? formatConductivity(r.limits.thicknessWeightedMeanSPerM, unit)
-                      : '—'}
-                  </td>
-                ))}
-              </tr>
-              <tr>
-                <th scope="row" className="pr-3 text-left font-normal">
-                  High-frequency limit (face layer)
-                </th>
-                {results.map((r) => (
-                  <td key={r.id} className="pr-3">
-                    {formatConductivity(r.limits.surfaceLayerSPerM, unit)}
-                  </td>
-                ))}
-              </tr>
-            </tbody>
-          </table>
-        </div>
-      </details>
+      <FiguresTable
+        summary="The figures plotted, as a table"
+        caption={`${title} in ${label}, at the decades of the sweep, and the limits`}
+        corner="Frequency"
+        columns={results.map((r) => r.name)}
+        rows={[
+          ...samples.map((i) => ({
+            key: i,
+            label: formatHertz(frequencies[i]!),
+            cells: results.map((r) =>
+              formatConductivity(r.points[i]!.apparentConductivitySPerM, unit),
+            ),
+          })),
+          {
+            key: 'low',
+            label: 'Low-frequency limit (thickness-weighted mean)',
+            cells: results.map((r) =>
+              r.limits.thicknessWeightedMeanSPerM !== null
+                ? formatConductivity(r.limits.thicknessWeightedMeanSPerM, unit)
+                : '—',
+            ),
+          },
+          {
+            key: 'high',
+            label: 'High-frequency limit (face layer)',
+            cells: results.map((r) => formatConductivity(r.limits.surfaceLayerSPerM, unit)),
+          },
+        ]}
+      />
     </figure>
   );
 }
@@ -286,45 +256,20 @@ export function ImpedancePlaneChart({ results }: { results: BlankResult[] }) {
           </LineChart>
         </ResponsiveContainer>
       </div>
-      <details className="mt-2 text-sm">
-        <summary className="cursor-pointer text-patina-700">
-          The figures plotted, as a table
-        </summary>
-        <div className="overflow-x-auto">
-          <table className="mt-1 w-full text-right tabular-nums">
-            <caption className="sr-only">
-              Normalised resistance and reactance (ΔR/X0, X/X0) at the decades of the sweep
-            </caption>
-            <thead>
-              <tr>
-                <th scope="col" className="pr-3 text-left">
-                  Frequency
-                </th>
-                {results.map((r) => (
-                  <th key={r.id} scope="col" className="pr-3">
-                    {r.name}: ΔR/X0, X/X0
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {samples.map((i) => (
-                <tr key={i}>
-                  <th scope="row" className="pr-3 text-left font-normal">
-                    {formatHertz(frequencies[i]!)}
-                  </th>
-                  {results.map((r) => (
-                    <td key={r.id} className="pr-3">
-                      {formatNumber(r.points[i]!.normalizedResistance)},{' '}
-                      {formatNumber(r.points[i]!.normalizedReactance)}
-                    </td>
-                  ))}
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
-      </details>
+      <FiguresTable
+        summary="The figures plotted, as a table"
+        caption="Normalised resistance and reactance (ΔR/X0, X/X0) at the decades of the sweep"
+        corner="Frequency"
+        columns={results.map((r) => `${r.name}: ΔR/X0, X/X0`)}
+        rows={samples.map((i) => ({
+          key: i,
+          label: formatHertz(frequencies[i]!),
+          cells: results.map(
+            (r) =>
+              `${formatNumber(r.points[i]!.normalizedResistance)}, ${formatNumber(r.points[i]!.normalizedReactance)}`,
+          ),
+        }))}
+      />
     </figure>
   );
 }
