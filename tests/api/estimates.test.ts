@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Express } from 'express';
 import type { Knex } from 'knex';
 import { createTestApp } from '../helpers/test-app';
+import { typicalLaunch } from '../helpers/launches';
 
 let app: Express;
 let knex: Knex;
@@ -173,19 +174,7 @@ describe('POST /api/v1/estimates/apparent-conductivity', () => {
 });
 
 describe('POST /api/v1/estimates/launch', () => {
-  const launch = {
-    bank: {
-      capacitance: { value: 50, unit: 'µF' },
-      voltage: { value: 400, unit: 'V' },
-      seriesResistance: { value: 50, unit: 'mohm' },
-    },
-    coil: { innerRadius: mm(5), outerRadius: mm(12), length: mm(10), turns: 100, awg: 26 },
-    blank: {
-      diameter: mm(23),
-      layers: [{ material: { alloy: 'gilding-metal-c21000' }, thickness: mm(1.75) }],
-    },
-    gap: mm(0.5),
-  };
+  const launch = typicalLaunch;
   it('valid → 4 J stored, a peak in the order of 100 A, under 1 % efficient, a balanced ledger (common practice, no source)', async () => {
     const res = await post('launch', launch);
     expect(res.status).toBe(200);

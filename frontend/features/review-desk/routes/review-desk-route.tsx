@@ -1,4 +1,3 @@
-import { Navigate } from 'react-router-dom';
 import { ProblemMessage } from '../../../components/problem-message';
 import { UnitSwitcher } from '../../../components/unit-switcher';
 import { useMe } from '../../../lib/session';
@@ -7,15 +6,13 @@ import { usePending, useReleases, useReviewMutations } from '../api/review';
 import { ImportPanel } from '../components/import-panel';
 import { RevisionCard } from '../components/revision-card';
 
+/** Curators' and admins' desk; the router's RequireRole guard keeps everyone else out. */
 export function ReviewDeskRoute() {
   const me = useMe();
   const pending = usePending();
   const releases = useReleases();
   const { review, publish } = useReviewMutations();
   const [units] = useUnitPreferences();
-  if (me.data === null) return <Navigate to="/sign-in" replace />;
-  if (me.data && me.data.role !== 'curator' && me.data.role !== 'admin')
-    return <p role="alert">The Review Desk is for curators.</p>;
   return (
     <section aria-labelledby="desk-title" className="flex flex-col gap-5">
       <header className="flex flex-wrap items-end justify-between gap-3">
