@@ -1,15 +1,72 @@
-import { matthiessen, type AlloySeed } from './alloy-seed';
+import type { AlloySeed } from './alloy-seed';
 
-const CRC_RHO = 4;
+// From-memory base sources (sources-base.ts), kept for the values no public document was located for.
 const CRC_DENSITY = 5;
 const ASM_NONFERROUS = 7;
 const ASM_STEEL = 8;
 const COINAGE = 11;
 const PERMEABILITY = 12;
 
+// Located documents (sources-general.ts); the figures read from them are in quoted-figures-general.ts.
+const IZA_ZINC = 200;
+const WIKI_PLATINUM = 201;
+const MATULA_GOLD = 202;
+const WEBELEMENTS_GOLD = 203;
+const WIKI_TANTALUM = 204;
+const WIKI_IRON = 205;
+const MATMAKE_LEAD = 206;
+const WIKI_TITANIUM = 207;
+const ASM_MAGNESIUM = 208;
+const MATMAKE_TUNGSTEN = 209;
+const MTS_TUNGSTEN = 210;
+const PREPROOM_TABLE = 211;
+const AGRAWAL_HANDBOOK = 212;
+const MATMAKE_ZIRCONIUM = 213;
+const MATERIALS_HANDBOOK_NI = 214;
+const MATMAKE_AL_IACS = 215;
+const AL_TYPICAL_TABLE = 216;
+const ASTM_B233 = 217;
+const MATWEB_5083_H32 = 218;
+const MATWEB_6063_T6 = 219;
+const MATWEB_7075_T6 = 220;
+const WIKI_7075 = 221;
+const NADCA_AL = 222;
+const MATWEB_A380 = 223;
+const MIF_A360 = 224;
+const MATWEB_A356 = 225;
+const AALCO_6082 = 226;
+const SUBSTECH_2011 = 227;
+const NADCA_ZINC = 228;
+const EN12844_ZINC = 229;
+const MIF_ZN_CU_TI = 230;
+const MATWEB_316 = 231;
+const ASM_304 = 232;
+const HPM_430 = 233;
+const MATWEB_410 = 234;
+const AZOM_17_4 = 235;
+const MATWEB_1018 = 236;
+const MATWEB_1045 = 237;
+const AZOM_GREY_IRON = 238;
+const HPM_CP_TITANIUM = 239;
+const MATWEB_TI64 = 240;
+const SUBSTECH_AZ31B = 241;
+const SOLDER_TABLE = 242;
+const THOUGHTCO_SILVER = 243;
+const MATMAKE_COBALT = 244;
+const MOLYBDENUM_COM = 245;
+const MATWEB_TIN = 246;
+const PALLADIUM_PD_ORG = 247;
+const SMC_NICKEL_200 = 248;
+const WIKI_PERMEABILITY = 249;
+const RMP_1008 = 250;
+const DEA_NI_CU_400 = 251;
+const WIKI_6005 = 252;
+const MATMAKE_1060 = 253;
+const MATMAKE_3105 = 254;
+
 /** Pure metals, aluminium, zinc, nickel, iron and steel, and the rest. */
 export const generalAlloys: AlloySeed[] = [
-  // Pure and commercially pure metals (CRC Handbook, recalled)
+  // Pure and commercially pure metals
   {
     slug: 'silver-fine',
     name: 'Silver, fine (99.9 %)',
@@ -19,10 +76,10 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Ag: 99.9 },
     condition: 'annealed',
     conductivity: { uohmCm: [1.59, 1.587, 1.63] },
-    conductivitySource: CRC_RHO,
+    conductivitySource: PREPROOM_TABLE,
     densityGPerCm3: [10.49, 10.47, 10.5],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0038, source: CRC_RHO },
+    densitySource: THOUGHTCO_SILVER,
+    alpha: { value: 0.0038, source: PREPROOM_TABLE },
   },
   {
     slug: 'gold-fine',
@@ -32,11 +89,11 @@ export const generalAlloys: AlloySeed[] = [
     aliases: ['fine gold', '24-carat gold'],
     composition: { Au: 99.99 },
     condition: 'annealed',
-    conductivity: { uohmCm: [2.21, 2.2, 2.27] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [2.21, 2.19, 2.27] },
+    conductivitySource: MATULA_GOLD,
     densityGPerCm3: [19.3, 19.28, 19.32],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0034, source: CRC_RHO },
+    densitySource: WEBELEMENTS_GOLD,
+    alpha: { value: 0.0034, source: PREPROOM_TABLE },
   },
   {
     slug: 'platinum',
@@ -45,11 +102,11 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { Pt: 99.95 },
     condition: 'annealed',
-    conductivity: { uohmCm: [10.6, 10.4, 10.8] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [10.5, 10.4, 10.8] },
+    conductivitySource: WIKI_PLATINUM,
     densityGPerCm3: [21.45, 21.4, 21.47],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.00392, source: CRC_RHO },
+    densitySource: WIKI_PLATINUM,
+    alpha: { value: 0.00392, source: PREPROOM_TABLE },
   },
   {
     slug: 'palladium',
@@ -59,10 +116,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Pd: 99.95 },
     condition: 'annealed',
     conductivity: { uohmCm: [10.5, 10.3, 10.8] },
-    conductivitySource: CRC_RHO,
+    conductivitySource: PALLADIUM_PD_ORG,
     densityGPerCm3: [12.02, 12.0, 12.03],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0038, source: CRC_RHO },
+    densitySource: PALLADIUM_PD_ORG,
   },
   {
     slug: 'aluminium-1199',
@@ -71,11 +127,10 @@ export const generalAlloys: AlloySeed[] = [
     uns: 'A91199',
     composition: { Al: 99.99 },
     condition: 'O (annealed)',
-    conductivity: { iacs: [65.0, 64.0, 65.5] },
-    conductivitySource: CRC_RHO,
+    conductivity: { iacs: [64.5, 64.0, 65.5] },
+    conductivitySource: MATMAKE_AL_IACS,
     densityGPerCm3: [2.699, 2.698, 2.7],
     densitySource: CRC_DENSITY,
-    alpha: { value: 0.00429, source: CRC_RHO },
   },
   {
     slug: 'zinc-shg',
@@ -85,11 +140,11 @@ export const generalAlloys: AlloySeed[] = [
     aliases: ['SHG zinc'],
     composition: { Zn: 99.99 },
     condition: 'rolled',
-    conductivity: { iacs: [29.0, 28.5, 29.2] },
-    conductivitySource: CRC_RHO,
+    conductivity: { iacs: [29.0, 28.5, 29.3] },
+    conductivitySource: IZA_ZINC,
     densityGPerCm3: [7.14, 7.13, 7.14],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0042, source: CRC_RHO },
+    densitySource: IZA_ZINC,
+    alpha: { value: 0.0037, source: PREPROOM_TABLE },
   },
   {
     slug: 'tin',
@@ -98,11 +153,11 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { Sn: 99.9 },
     condition: 'cast',
-    conductivity: { uohmCm: [11.5, 11.0, 12.0] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [10.9, 10.5, 12.0] },
+    conductivitySource: PREPROOM_TABLE,
     densityGPerCm3: [7.28, 7.26, 7.3],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0046, source: CRC_RHO },
+    densitySource: MATWEB_TIN,
+    alpha: { value: 0.0045, source: PREPROOM_TABLE },
   },
   {
     slug: 'lead',
@@ -112,10 +167,10 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Pb: 99.9 },
     condition: 'cast',
     conductivity: { uohmCm: [20.8, 20.6, 21.3] },
-    conductivitySource: CRC_RHO,
+    conductivitySource: MATMAKE_LEAD,
     densityGPerCm3: [11.34, 11.3, 11.35],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0039, source: CRC_RHO },
+    densitySource: MATMAKE_LEAD,
+    alpha: { value: 0.0039, source: PREPROOM_TABLE },
   },
   {
     slug: 'iron-pure',
@@ -124,11 +179,11 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { Fe: 99.9 },
     condition: 'annealed',
-    conductivity: { uohmCm: [9.71, 9.61, 10.1] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [9.61, 9.5, 10.1] },
+    conductivitySource: WIKI_IRON,
     densityGPerCm3: [7.874, 7.86, 7.88],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0065, source: CRC_RHO },
+    densitySource: WIKI_IRON,
+    alpha: { value: 0.005, source: PREPROOM_TABLE },
     magnetic: { relativePermeability: [200, 150, 5000], source: PERMEABILITY },
   },
   {
@@ -139,10 +194,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Ti: 99.9 },
     condition: 'annealed',
     conductivity: { uohmCm: [42.0, 40.0, 47.0] },
-    conductivitySource: CRC_RHO,
+    conductivitySource: WIKI_TITANIUM,
     densityGPerCm3: [4.506, 4.5, 4.51],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0038, source: CRC_RHO },
+    densitySource: WIKI_TITANIUM,
   },
   {
     slug: 'magnesium-pure',
@@ -151,11 +205,10 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { Mg: 99.9 },
     condition: 'cast',
-    conductivity: { uohmCm: [4.39, 4.38, 4.6] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [4.47, 4.38, 4.6] },
+    conductivitySource: ASM_MAGNESIUM,
     densityGPerCm3: [1.738, 1.736, 1.74],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0039, source: CRC_RHO },
+    densitySource: ASM_MAGNESIUM,
   },
   {
     slug: 'tungsten',
@@ -164,11 +217,11 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { W: 99.95 },
     condition: 'sintered and worked',
-    conductivity: { uohmCm: [5.28, 5.28, 5.65] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [5.39, 5.28, 5.65] },
+    conductivitySource: MATMAKE_TUNGSTEN,
     densityGPerCm3: [19.25, 19.2, 19.3],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0045, source: CRC_RHO },
+    densitySource: MATMAKE_TUNGSTEN,
+    alpha: { value: 0.0046, source: MTS_TUNGSTEN },
   },
   {
     slug: 'molybdenum',
@@ -177,11 +230,10 @@ export const generalAlloys: AlloySeed[] = [
     uns: null,
     composition: { Mo: 99.95 },
     condition: 'sintered and worked',
-    conductivity: { uohmCm: [5.34, 5.2, 5.7] },
-    conductivitySource: CRC_RHO,
+    conductivity: { uohmCm: [5.7, 5.2, 5.8] },
+    conductivitySource: MOLYBDENUM_COM,
     densityGPerCm3: [10.22, 10.2, 10.28],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.0046, source: CRC_RHO },
+    densitySource: MOLYBDENUM_COM,
   },
   {
     slug: 'cobalt',
@@ -191,10 +243,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Co: 99.9 },
     condition: 'annealed',
     conductivity: { uohmCm: [6.24, 6.0, 6.6] },
-    conductivitySource: CRC_RHO,
+    conductivitySource: MATMAKE_COBALT,
     densityGPerCm3: [8.9, 8.85, 8.9],
-    densitySource: CRC_DENSITY,
-    alpha: { value: 0.006, source: CRC_RHO },
+    densitySource: MATMAKE_COBALT,
     magnetic: { relativePermeability: [70, 50, 250], source: PERMEABILITY },
   },
   {
@@ -204,14 +255,55 @@ export const generalAlloys: AlloySeed[] = [
     uns: 'N02200',
     composition: { Ni: 99.5, Fe: 0.2, Mn: 0.2, C: 0.1 },
     condition: 'annealed',
-    conductivity: { iacs: [18.1, 18.0, 25.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivity: { iacs: [18.0, 17.5, 25.0] },
+    conductivitySource: SMC_NICKEL_200,
     densityGPerCm3: [8.89, 8.88, 8.91],
     densitySource: ASM_NONFERROUS,
-    magnetic: { relativePermeability: [100, 50, 600], source: PERMEABILITY },
+    magnetic: { relativePermeability: [350, 100, 600], source: WIKI_PERMEABILITY },
     notes: 'Ferromagnetic: an eddy-current reading depends on its permeability as much as on σ.',
   },
+  {
+    slug: 'nickel-electrolytic',
+    name: 'Nickel, electrolytic (99.9 %)',
+    family: 'nickel',
+    uns: null,
+    aliases: ['pure nickel', 'nickel cathode'],
+    composition: { Ni: 99.9 },
+    condition: 'annealed',
+    conductivity: { iacs: [25.0, 23.5, 25.5] },
+    conductivitySource: MATERIALS_HANDBOOK_NI,
+    densityGPerCm3: [8.902, 8.89, 8.91],
+    densitySource: MATERIALS_HANDBOOK_NI,
+    magnetic: { relativePermeability: [350, 100, 600], source: WIKI_PERMEABILITY },
+    notes:
+      'High-purity nickel, about a third more conductive than Nickel 200: a reading near 25 %IACS on a magnetic, nickel-dense part. Ferromagnetic.',
+  },
+  {
+    slug: 'tantalum',
+    name: 'Tantalum (99.95 %)',
+    family: 'other',
+    uns: 'R05200',
+    composition: { Ta: 99.95 },
+    condition: 'annealed',
+    conductivity: { uohmCm: [13.1, 12.4, 13.6] },
+    conductivitySource: WIKI_TANTALUM,
+    densityGPerCm3: [16.69, 16.6, 16.7],
+    densitySource: WIKI_TANTALUM,
+  },
+  {
+    slug: 'zirconium',
+    name: 'Zirconium (99.8 %)',
+    family: 'other',
+    uns: null,
+    composition: { Zr: 99.8 },
+    condition: 'annealed',
+    conductivity: { uohmCm: [42.0, 40.0, 45.0] },
+    conductivitySource: MATMAKE_ZIRCONIUM,
+    densityGPerCm3: [6.52, 6.5, 6.53],
+    densitySource: MATMAKE_ZIRCONIUM,
+  },
 
+  // Aluminium
   {
     slug: 'aluminium-1100-o',
     name: 'Aluminium 1100-O',
@@ -220,10 +312,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 99.0, Cu: 0.12 },
     condition: 'O (annealed)',
     conductivity: { iacs: [59.0, 57.0, 61.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: AL_TYPICAL_TABLE,
     densityGPerCm3: [2.71, 2.7, 2.72],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 59),
+    densitySource: AL_TYPICAL_TABLE,
   },
   {
     slug: 'aluminium-1350-h19',
@@ -234,10 +325,50 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 99.5 },
     condition: 'H19 (hard drawn)',
     conductivity: { iacs: [61.8, 61.0, 62.5] },
-    conductivitySource: 9,
+    conductivitySource: AL_TYPICAL_TABLE,
+    densityGPerCm3: [2.705, 2.69, 2.71],
+    densitySource: AL_TYPICAL_TABLE,
+    alpha: { value: 0.00403, source: AGRAWAL_HANDBOOK },
+  },
+  {
+    slug: 'aluminium-1350-o',
+    name: 'Aluminium 1350-O (conductor grade, annealed)',
+    family: 'aluminium',
+    uns: 'A91350',
+    aliases: ['annealed EC aluminium', '1350 drawing stock'],
+    composition: { Al: 99.5 },
+    condition: 'O (annealed)',
+    conductivity: { iacs: [61.8, 61.3, 62.0] },
+    conductivitySource: ASTM_B233,
+    densityGPerCm3: [2.7, 2.69, 2.71],
+    densitySource: AL_TYPICAL_TABLE,
+    notes:
+      'Resistivity is the ASTM B233 maximum for the temper, so real stock reads at or above it.',
+  },
+  {
+    slug: 'aluminium-1060-o',
+    name: 'Aluminium 1060-O',
+    family: 'aluminium',
+    uns: 'A91060',
+    composition: { Al: 99.6 },
+    condition: 'O (annealed)',
+    conductivity: { iacs: [62.0, 61.0, 62.5] },
+    conductivitySource: MATMAKE_AL_IACS,
     densityGPerCm3: [2.705, 2.7, 2.71],
-    densitySource: ASM_NONFERROUS,
-    alpha: { value: 0.00403, source: 9 },
+    densitySource: MATMAKE_1060,
+  },
+  {
+    slug: 'aluminium-2011-t3',
+    name: 'Aluminium 2011-T3 (free-machining)',
+    family: 'aluminium',
+    uns: 'A92011',
+    aliases: ['free-machining aluminium', 'screw-machine aluminium'],
+    composition: { Al: 93.7, Cu: 5.5, Pb: 0.4, Bi: 0.4 },
+    condition: 'T3',
+    conductivity: { uohmCm: [4.49, 4.2, 4.8] },
+    conductivitySource: SUBSTECH_2011,
+    densityGPerCm3: [2.83, 2.82, 2.84],
+    densitySource: SUBSTECH_2011,
   },
   {
     slug: 'aluminium-2024-t3',
@@ -247,10 +378,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 93.5, Cu: 4.4, Mg: 1.5, Mn: 0.6 },
     condition: 'T3',
     conductivity: { iacs: [30.0, 28.0, 32.0] },
-    conductivitySource: ASM_NONFERROUS,
-    densityGPerCm3: [2.78, 2.77, 2.79],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 30),
+    conductivitySource: AL_TYPICAL_TABLE,
+    densityGPerCm3: [2.78, 2.76, 2.79],
+    densitySource: AL_TYPICAL_TABLE,
   },
   {
     slug: 'aluminium-3003-h14',
@@ -259,11 +389,25 @@ export const generalAlloys: AlloySeed[] = [
     uns: 'A93003',
     composition: { Al: 98.6, Mn: 1.2, Cu: 0.12 },
     condition: 'H14',
-    conductivity: { iacs: [40.0, 38.0, 42.0] },
-    conductivitySource: ASM_NONFERROUS,
-    densityGPerCm3: [2.73, 2.72, 2.74],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 40),
+    conductivity: { iacs: [41.0, 38.0, 42.0] },
+    conductivitySource: MATMAKE_AL_IACS,
+    densityGPerCm3: [2.73, 2.72, 2.75],
+    densitySource: AL_TYPICAL_TABLE,
+  },
+  {
+    slug: 'aluminium-3105-o',
+    name: 'Aluminium 3105-O',
+    family: 'aluminium',
+    uns: 'A93105',
+    aliases: ['aluminium siding sheet'],
+    composition: { Al: 98.7, Mn: 0.55, Mg: 0.5 },
+    condition: 'O (annealed)',
+    conductivity: { iacs: [45.0, 41.0, 46.0] },
+    conductivitySource: MATMAKE_AL_IACS,
+    densityGPerCm3: [2.72, 2.71, 2.73],
+    densitySource: MATMAKE_3105,
+    notes:
+      'Building sheet (siding, gutters, closures): strain-hardened tempers read a few %IACS lower.',
   },
   {
     slug: 'aluminium-5052-h32',
@@ -273,10 +417,35 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 97.25, Mg: 2.5, Cr: 0.25 },
     condition: 'H32',
     conductivity: { iacs: [35.0, 34.0, 36.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: AL_TYPICAL_TABLE,
     densityGPerCm3: [2.68, 2.67, 2.69],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 35),
+    densitySource: AL_TYPICAL_TABLE,
+  },
+  {
+    slug: 'aluminium-5083-h32',
+    name: 'Aluminium 5083-H32',
+    family: 'aluminium',
+    uns: 'A95083',
+    aliases: ['marine-grade aluminium', 'AlMg4.5Mn'],
+    composition: { Al: 94.7, Mg: 4.4, Mn: 0.7, Cr: 0.15 },
+    condition: 'H32',
+    conductivity: { uohmCm: [5.9, 5.6, 6.2] },
+    conductivitySource: MATWEB_5083_H32,
+    densityGPerCm3: [2.66, 2.65, 2.67],
+    densitySource: MATWEB_5083_H32,
+  },
+  {
+    slug: 'aluminium-6005-t5',
+    name: 'Aluminium 6005-T5',
+    family: 'aluminium',
+    uns: 'A96005',
+    composition: { Al: 98.5, Si: 0.75, Mg: 0.5 },
+    condition: 'T5',
+    conductivity: { iacs: [49.0, 47.0, 51.0] },
+    conductivitySource: MATMAKE_AL_IACS,
+    densityGPerCm3: [2.7, 2.69, 2.71],
+    densitySource: WIKI_6005,
+    notes: 'Structural extrusion alloy (rails, ladders, frames).',
   },
   {
     slug: 'aluminium-6061-t6',
@@ -286,10 +455,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 97.9, Mg: 1.0, Si: 0.6, Cu: 0.28, Cr: 0.2 },
     condition: 'T6',
     conductivity: { iacs: [43.0, 40.0, 45.0] },
-    conductivitySource: 14,
-    densityGPerCm3: [2.7, 2.69, 2.71],
-    densitySource: 14,
-    alpha: matthiessen('Al', 43),
+    conductivitySource: AL_TYPICAL_TABLE,
+    densityGPerCm3: [2.7, 2.69, 2.72],
+    densitySource: AL_TYPICAL_TABLE,
   },
   {
     slug: 'aluminium-6063-t6',
@@ -298,12 +466,24 @@ export const generalAlloys: AlloySeed[] = [
     uns: 'A96063',
     composition: { Al: 98.9, Mg: 0.7, Si: 0.4 },
     condition: 'T6',
-    conductivity: { iacs: [53.0, 50.0, 55.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivity: { iacs: [52.0, 50.0, 55.0] },
+    conductivitySource: MATWEB_6063_T6,
     densityGPerCm3: [2.7, 2.69, 2.71],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 53),
+    densitySource: MATWEB_6063_T6,
     notes: 'The usual extrusion alloy of window frames and profiles in shredded scrap.',
+  },
+  {
+    slug: 'aluminium-6082-t6',
+    name: 'Aluminium 6082-T6',
+    family: 'aluminium',
+    uns: 'A96082',
+    aliases: ['AlSi1MgMn', 'structural aluminium'],
+    composition: { Al: 97.4, Si: 1.0, Mg: 0.9, Mn: 0.7 },
+    condition: 'T6',
+    conductivity: { uohmCm: [3.8, 3.6, 4.2] },
+    conductivitySource: AALCO_6082,
+    densityGPerCm3: [2.7, 2.69, 2.71],
+    densitySource: AALCO_6082,
   },
   {
     slug: 'aluminium-7075-t6',
@@ -312,11 +492,10 @@ export const generalAlloys: AlloySeed[] = [
     uns: 'A97075',
     composition: { Al: 90, Zn: 5.6, Mg: 2.5, Cu: 1.6, Cr: 0.23 },
     condition: 'T6',
-    conductivity: { iacs: [33.0, 32.0, 35.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivity: { iacs: [33.5, 32.0, 35.0] },
+    conductivitySource: WIKI_7075,
     densityGPerCm3: [2.81, 2.8, 2.82],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 33),
+    densitySource: MATWEB_7075_T6,
   },
   {
     slug: 'aluminium-a380',
@@ -326,10 +505,35 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Al: 85.5, Si: 8.5, Cu: 3.5, Fe: 1.3, Zn: 1.2 },
     condition: 'as cast (F)',
     conductivity: { iacs: [27.0, 23.0, 27.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: MATWEB_A380,
     densityGPerCm3: [2.71, 2.7, 2.76],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Al', 27),
+    densitySource: NADCA_AL,
+  },
+  {
+    slug: 'aluminium-a360',
+    name: 'Aluminium die-casting alloy A360',
+    family: 'aluminium',
+    uns: 'A13600',
+    composition: { Al: 89.8, Si: 9.5, Mg: 0.5 },
+    condition: 'as cast (F)',
+    conductivity: { iacs: [30.0, 28.0, 31.0] },
+    conductivitySource: MIF_A360,
+    densityGPerCm3: [2.63, 2.62, 2.64],
+    densitySource: NADCA_AL,
+  },
+  {
+    slug: 'aluminium-a356-t6',
+    name: 'Aluminium casting alloy A356-T6',
+    family: 'aluminium',
+    uns: 'A13560',
+    aliases: ['A356', 'cast aluminium wheel alloy'],
+    composition: { Al: 92.4, Si: 7.0, Mg: 0.35 },
+    condition: 'T6 (sand cast)',
+    conductivity: { uohmCm: [4.4, 4.1, 4.7] },
+    conductivitySource: MATWEB_A356,
+    densityGPerCm3: [2.67, 2.66, 2.69],
+    densitySource: MATWEB_A356,
+    notes: 'Wheels and structural castings; permanent-mould castings read within the same range.',
   },
 
   // Zinc alloys
@@ -342,10 +546,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Zn: 95.96, Al: 4, Mg: 0.04 },
     condition: 'die cast',
     conductivity: { iacs: [27.0, 26.0, 28.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: NADCA_ZINC,
     densityGPerCm3: [6.6, 6.57, 6.7],
-    densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Zn', 27),
+    densitySource: NADCA_ZINC,
   },
   {
     slug: 'zinc-alloy-5',
@@ -356,10 +559,76 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Zn: 94.95, Al: 4, Cu: 1, Mg: 0.05 },
     condition: 'die cast',
     conductivity: { iacs: [26.0, 25.0, 27.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: NADCA_ZINC,
     densityGPerCm3: [6.7, 6.6, 6.7],
+    densitySource: NADCA_ZINC,
+  },
+  {
+    slug: 'zinc-alloy-2',
+    name: 'Zinc die-casting alloy 2 (ZnAl4Cu3)',
+    family: 'zinc',
+    uns: 'Z35541',
+    aliases: ['Zamak 2', 'ZP0430'],
+    composition: { Zn: 92.96, Al: 4, Cu: 3, Mg: 0.04 },
+    condition: 'die cast',
+    conductivity: { iacs: [25.0, 24.0, 26.0] },
+    conductivitySource: EN12844_ZINC,
+    densityGPerCm3: [6.8, 6.6, 6.85],
+    densitySource: EN12844_ZINC,
+  },
+  {
+    slug: 'zinc-za-8',
+    name: 'Zinc-aluminium alloy ZA-8 (ZnAl8Cu1)',
+    family: 'zinc',
+    uns: 'Z35638',
+    aliases: ['ZA-8', 'ZP0810'],
+    composition: { Zn: 90.6, Al: 8.4, Cu: 1.0, Mg: 0.02 },
+    condition: 'die cast',
+    conductivity: { iacs: [27.7, 27.0, 28.5] },
+    conductivitySource: NADCA_ZINC,
+    densityGPerCm3: [6.28, 6.25, 6.35],
+    densitySource: NADCA_ZINC,
+  },
+  {
+    slug: 'zinc-za-12',
+    name: 'Zinc-aluminium alloy ZA-12 (ZnAl11Cu1)',
+    family: 'zinc',
+    uns: 'Z35633',
+    aliases: ['ZA-12'],
+    composition: { Zn: 88.1, Al: 11.0, Cu: 0.9, Mg: 0.02 },
+    condition: 'cast',
+    conductivity: { iacs: [28.3, 27.5, 29.0] },
+    conductivitySource: NADCA_ZINC,
+    densityGPerCm3: [6.03, 6.0, 6.1],
+    densitySource: NADCA_ZINC,
+  },
+  {
+    slug: 'zinc-za-27',
+    name: 'Zinc-aluminium alloy ZA-27 (ZnAl27Cu2)',
+    family: 'zinc',
+    uns: 'Z35841',
+    aliases: ['ZA-27'],
+    composition: { Zn: 70.8, Al: 27.0, Cu: 2.2, Mg: 0.015 },
+    condition: 'cast',
+    conductivity: { iacs: [29.7, 29.0, 30.5] },
+    conductivitySource: NADCA_ZINC,
+    densityGPerCm3: [5.01, 4.98, 5.05],
+    densitySource: NADCA_ZINC,
+    notes: 'Light for a zinc alloy: its density is nearer cast iron than Zamak.',
+  },
+  {
+    slug: 'zinc-rolled-cu-ti',
+    name: 'Zinc, rolled (Zn-Cu-Ti sheet)',
+    family: 'zinc',
+    uns: 'Z41121',
+    aliases: ['titanium zinc', 'zinc-copper-titanium sheet', 'roofing zinc'],
+    composition: { Zn: 99.77, Cu: 0.15, Ti: 0.08 },
+    condition: 'rolled',
+    conductivity: { iacs: [27.0, 26.0, 28.5] },
+    conductivitySource: MIF_ZN_CU_TI,
+    densityGPerCm3: [7.18, 7.14, 7.2],
     densitySource: ASM_NONFERROUS,
-    alpha: matthiessen('Zn', 26),
+    notes: 'Roofing and gutter sheet; commercially pure zinc with copper and titanium added.',
   },
   {
     slug: 'zinc-coinage-strip',
@@ -372,11 +641,10 @@ export const generalAlloys: AlloySeed[] = [
     conductivitySource: COINAGE,
     densityGPerCm3: [7.14, 7.12, 7.16],
     densitySource: COINAGE,
-    alpha: matthiessen('Zn', 27.5),
     notes: 'Core of copper-plated zinc coins.',
   },
 
-  // Steels (ASM Handbook Vol. 1, recalled)
+  // Steels and cast iron
   {
     slug: 'steel-1008',
     name: 'Low-carbon steel 1008',
@@ -386,11 +654,57 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Fe: 99.3, Mn: 0.4, C: 0.08 },
     condition: 'annealed',
     conductivity: { uohmCm: [14.2, 13.0, 15.9] },
-    conductivitySource: ASM_STEEL,
+    conductivitySource: RMP_1008,
     densityGPerCm3: [7.87, 7.85, 7.87],
-    densitySource: ASM_STEEL,
-    magnetic: { relativePermeability: [100, 50, 2000], source: PERMEABILITY },
+    densitySource: RMP_1008,
+    magnetic: { relativePermeability: [100, 50, 2000], source: WIKI_PERMEABILITY },
     notes: 'Core of copper-plated and nickel-plated steel coins. Ferromagnetic.',
+  },
+  {
+    slug: 'steel-1018',
+    name: 'Low-carbon steel 1018',
+    family: 'iron-steel',
+    uns: 'G10180',
+    aliases: ['1018 bar', 'case-hardening steel'],
+    composition: { Fe: 98.9, Mn: 0.75, C: 0.18 },
+    condition: 'annealed',
+    conductivity: { uohmCm: [17.1, 15.9, 18.5] },
+    conductivitySource: MATWEB_1018,
+    densityGPerCm3: [7.87, 7.85, 7.88],
+    densitySource: MATWEB_1018,
+    magnetic: { relativePermeability: [100, 50, 2000], source: WIKI_PERMEABILITY },
+    notes: 'Ferromagnetic.',
+  },
+  {
+    slug: 'steel-1045',
+    name: 'Medium-carbon steel 1045',
+    family: 'iron-steel',
+    uns: 'G10450',
+    aliases: ['C45', 'shafting steel'],
+    composition: { Fe: 98.5, Mn: 0.75, C: 0.45 },
+    condition: 'annealed',
+    conductivity: { uohmCm: [17.4, 16.2, 19.0] },
+    conductivitySource: MATWEB_1045,
+    densityGPerCm3: [7.85, 7.84, 7.87],
+    densitySource: MATWEB_1045,
+    magnetic: { relativePermeability: [100, 50, 1500], source: WIKI_PERMEABILITY },
+    notes: 'Ferromagnetic.',
+  },
+  {
+    slug: 'grey-cast-iron',
+    name: 'Grey cast iron',
+    family: 'iron-steel',
+    uns: null,
+    aliases: ['gray iron', 'cast iron'],
+    composition: { Fe: 93.5, C: 3.4, Si: 2.2, Mn: 0.6 },
+    condition: 'as cast',
+    conductivity: { uohmCm: [90.0, 80.0, 100.0] },
+    conductivitySource: AZOM_GREY_IRON,
+    densityGPerCm3: [7.2, 7.0, 7.3],
+    densitySource: AZOM_GREY_IRON,
+    magnetic: { relativePermeability: [200, 50, 600], source: PERMEABILITY },
+    notes:
+      'Engine blocks, brake drums, machine beds. Resistivity rises with graphite content. Ferromagnetic.',
   },
   {
     slug: 'stainless-304',
@@ -401,10 +715,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Fe: 70, Cr: 19, Ni: 9.25, Mn: 1.5 },
     condition: 'annealed',
     conductivity: { uohmCm: [72.0, 69.0, 74.0] },
-    conductivitySource: ASM_STEEL,
+    conductivitySource: ASM_304,
     densityGPerCm3: [8.0, 7.9, 8.03],
-    densitySource: ASM_STEEL,
-    alpha: { value: 0.00094, source: ASM_STEEL },
+    densitySource: ASM_304,
     notes: 'Austenitic: not magnetic annealed; cold work can make it slightly magnetic.',
   },
   {
@@ -416,9 +729,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Fe: 67, Cr: 17, Ni: 12, Mo: 2.5, Mn: 1.5 },
     condition: 'annealed',
     conductivity: { uohmCm: [74.0, 72.0, 76.0] },
-    conductivitySource: ASM_STEEL,
+    conductivitySource: MATWEB_316,
     densityGPerCm3: [8.0, 7.96, 8.03],
-    densitySource: ASM_STEEL,
+    densitySource: MATWEB_316,
   },
   {
     slug: 'stainless-430',
@@ -429,14 +742,45 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Fe: 82, Cr: 17, Mn: 1 },
     condition: 'annealed',
     conductivity: { uohmCm: [60.0, 57.0, 62.0] },
-    conductivitySource: ASM_STEEL,
-    densityGPerCm3: [7.75, 7.7, 7.75],
-    densitySource: ASM_STEEL,
-    magnetic: { relativePermeability: [600, 200, 1500], source: PERMEABILITY },
+    conductivitySource: HPM_430,
+    densityGPerCm3: [7.75, 7.7, 7.76],
+    densitySource: HPM_430,
+    magnetic: { relativePermeability: [800, 200, 1500], source: HPM_430 },
     notes: 'Ferritic: magnetic.',
   },
+  {
+    slug: 'stainless-410',
+    name: 'Stainless steel 410',
+    family: 'iron-steel',
+    uns: 'S41000',
+    aliases: ['martensitic stainless', '13 % chromium steel', 'cutlery stainless'],
+    composition: { Fe: 86.4, Cr: 12.5, Mn: 0.6, C: 0.12 },
+    condition: 'hardened and tempered',
+    conductivity: { uohmCm: [57.0, 55.0, 59.0] },
+    conductivitySource: MATWEB_410,
+    densityGPerCm3: [7.8, 7.7, 7.8],
+    densitySource: MATWEB_410,
+    magnetic: { relativePermeability: [850, 700, 1000], source: MATWEB_410 },
+    notes: 'Martensitic: magnetic in every condition.',
+  },
+  {
+    slug: 'stainless-17-4ph',
+    name: 'Stainless steel 17-4 PH',
+    family: 'iron-steel',
+    uns: 'S17400',
+    aliases: ['17-4 PH', 'type 630', 'precipitation-hardening stainless'],
+    composition: { Fe: 75.2, Cr: 15.5, Ni: 4.5, Cu: 3.5, Nb: 0.3 },
+    condition: 'H1150 (aged)',
+    conductivity: { uohmCm: [80.0, 75.0, 100.0] },
+    conductivitySource: ASM_STEEL,
+    densityGPerCm3: [7.75, 7.7, 7.81],
+    densitySource: AZOM_17_4,
+    magnetic: { relativePermeability: [100, 40, 200], source: PERMEABILITY },
+    notes:
+      'Martensitic precipitation-hardening grade: magnetic. Solution-treated (A) reads higher in resistivity.',
+  },
 
-  // Nickel, titanium and magnesium alloys (ASM Handbook Vol. 2, recalled)
+  // Nickel, titanium and magnesium alloys
   {
     slug: 'nickel-copper-400',
     name: 'Nickel-copper alloy 400',
@@ -445,10 +789,10 @@ export const generalAlloys: AlloySeed[] = [
     aliases: ['Monel 400'],
     composition: { Ni: 66.5, Cu: 31.5, Fe: 1.2, Mn: 0.8 },
     condition: 'annealed',
-    conductivity: { uohmCm: [54.7, 51.0, 58.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivity: { uohmCm: [50.8, 48.0, 58.0] },
+    conductivitySource: DEA_NI_CU_400,
     densityGPerCm3: [8.8, 8.8, 8.83],
-    densitySource: ASM_NONFERROUS,
+    densitySource: DEA_NI_CU_400,
     magnetic: { relativePermeability: [1.01, 1.001, 2], source: PERMEABILITY },
     notes: 'Weakly ferromagnetic below its Curie point, which lies near room temperature.',
   },
@@ -474,9 +818,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Ti: 99.2, Fe: 0.3, O: 0.25 },
     condition: 'annealed',
     conductivity: { uohmCm: [56.0, 52.0, 58.0] },
-    conductivitySource: ASM_NONFERROUS,
-    densityGPerCm3: [4.51, 4.5, 4.51],
-    densitySource: ASM_NONFERROUS,
+    conductivitySource: HPM_CP_TITANIUM,
+    densityGPerCm3: [4.51, 4.5, 4.52],
+    densitySource: HPM_CP_TITANIUM,
   },
   {
     slug: 'titanium-6al-4v',
@@ -487,9 +831,9 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Ti: 90, Al: 6, V: 4 },
     condition: 'annealed',
     conductivity: { uohmCm: [178.0, 170.0, 180.0] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: MATWEB_TI64,
     densityGPerCm3: [4.43, 4.42, 4.43],
-    densitySource: ASM_NONFERROUS,
+    densitySource: MATWEB_TI64,
   },
   {
     slug: 'magnesium-az31b',
@@ -499,8 +843,49 @@ export const generalAlloys: AlloySeed[] = [
     composition: { Mg: 96, Al: 3, Zn: 1 },
     condition: 'H24',
     conductivity: { uohmCm: [9.2, 8.8, 9.6] },
-    conductivitySource: ASM_NONFERROUS,
+    conductivitySource: SUBSTECH_AZ31B,
     densityGPerCm3: [1.77, 1.77, 1.78],
-    densitySource: ASM_NONFERROUS,
+    densitySource: SUBSTECH_AZ31B,
+  },
+
+  // Solders
+  {
+    slug: 'solder-sn63-pb37',
+    name: 'Tin-lead solder 63/37 (eutectic)',
+    family: 'other',
+    uns: 'L13630',
+    aliases: ['63/37 solder', 'eutectic solder', 'Sn63Pb37'],
+    composition: { Sn: 63, Pb: 37 },
+    condition: 'cast',
+    conductivity: { uohmCm: [14.5, 14.0, 15.5] },
+    conductivitySource: SOLDER_TABLE,
+    densityGPerCm3: [8.4, 8.36, 8.42],
+    densitySource: SOLDER_TABLE,
+  },
+  {
+    slug: 'solder-sn60-pb40',
+    name: 'Tin-lead solder 60/40',
+    family: 'other',
+    uns: 'L13600',
+    aliases: ['60/40 solder', 'Sn60Pb40'],
+    composition: { Sn: 60, Pb: 40 },
+    condition: 'cast',
+    conductivity: { uohmCm: [15.3, 14.8, 16.0] },
+    conductivitySource: SOLDER_TABLE,
+    densityGPerCm3: [8.5, 8.45, 8.52],
+    densitySource: SOLDER_TABLE,
+  },
+  {
+    slug: 'solder-sac305',
+    name: 'Lead-free solder Sn-3.0Ag-0.5Cu (SAC305)',
+    family: 'other',
+    uns: null,
+    aliases: ['SAC305', 'lead-free solder'],
+    composition: { Sn: 96.5, Ag: 3.0, Cu: 0.5 },
+    condition: 'cast',
+    conductivity: { uohmCm: [13.2, 12.5, 14.0] },
+    conductivitySource: SOLDER_TABLE,
+    densityGPerCm3: [7.38, 7.36, 7.4],
+    densitySource: SOLDER_TABLE,
   },
 ];

@@ -19,12 +19,16 @@ export interface BaseMetal {
 }
 
 /**
- * Base metals with no pure row carrying a coefficient in the table. Nickel: ρ20 = 6.99 µΩ·cm,
- * α20 = 0.0060 /K (CRC Handbook's table of the elements' resistivity and the common tables of
- * coefficients; figures recalled, not re-checked).
+ * Base metals with no pure row carrying a located coefficient in the table (the table keeps only
+ * coefficients a located source prints). Figures recalled, not re-checked, from the CRC Handbook's
+ * table of the elements' resistivity and the common tables of coefficients: nickel ρ20 = 6.99
+ * µΩ·cm, α20 = 0.0060 /K; titanium 42 µΩ·cm, 0.0038 /K; magnesium 4.4 µΩ·cm, 0.0040 /K. An
+ * estimate from them is labelled "(recalled)" in its rule.
  */
 const RECALLED_BASES: Record<string, BaseMetal> = {
   Ni: { element: 'Ni', resistivityOhmM: 6.99e-8, alphaPerK: 0.006, from: 'nickel (recalled)' },
+  Ti: { element: 'Ti', resistivityOhmM: 42e-8, alphaPerK: 0.0038, from: 'titanium (recalled)' },
+  Mg: { element: 'Mg', resistivityOhmM: 4.4e-8, alphaPerK: 0.004, from: 'magnesium (recalled)' },
 };
 
 /** A row counts as its element's pure metal from this purity on, mass %. */
