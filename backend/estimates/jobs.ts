@@ -10,7 +10,8 @@ import {
   type ConductorLayer,
 } from '../../shared/physics/dodd-deeds';
 import { simulateLaunch, type LaunchInput } from '../../shared/physics/launch';
-import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
+import { apparentConductivityWarnings } from '../../shared/physics/sensor-warnings';
+import type { EstimateWarning } from '../../shared/physics/warnings';
 import { percentIacs } from '../../shared/units/conductivity';
 import { kernelFor } from './kernel-cache';
 
@@ -65,15 +66,7 @@ function impedancePoints(job: SensorJob, deadline: number) {
 function apparentConductivity(job: SensorJob, deadline: number) {
   const kernel = kernelFor(job.coil, job.liftOffM);
   const points = apparentConductivitySweep(kernel, job.layers, job.frequenciesHz, { deadline });
-  const warnings: EstimateWarning[] = [];
-  const muR = Math.max(...job.layers.map((l) => l.relativePermeability));
-  if (muR > MAGNETIC_FROM_MU_R) {
-    const worst = Math.max(...points.map((p) => p.fitResidual));
-    warnings.push({
-      code: 'magnetic-layer',
-      message: `A layer is magnetic (µr up to ${Number(muR.toPrecision(3))}): an apparent conductivity read against non-magnetic calibration blocks is not meaningful here. The nearest homogeneous non-magnetic plate misses the stack's normalised impedance by up to ${Number((worst * 100).toPrecision(2))} % (fitResidual ${Number(worst.toPrecision(2))}), and the readings need not approach the limits given.`,
-    });
-  }
+  const warnings = apparentConductivityWarnings(job.layers, points);
   return {
     points: points.map((p) => ({
       frequencyHz: p.frequencyHz,

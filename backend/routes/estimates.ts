@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { chargeTime } from '../../shared/physics/bank';
 import { skinDepth } from '../../shared/physics/skin-depth';
 import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
 import type { Quantity } from '../../shared/units/quantity';
@@ -8,12 +9,15 @@ import type { CatalogueStore } from '../services/catalogue-store';
 import {
   blankLayersFromRequest,
   coilFromRequest,
+  coreFromRequest,
   frequenciesFromRequest,
   resolveMaterial,
   sensorLayersFromRequest,
+  supplyPowerFromRequest,
   switchFromRequest,
   wireFromRequest,
   type CoilInput,
+  type CoreInput,
   type SwitchInput,
   type LayerInput,
   type MaterialInput,
@@ -32,9 +36,10 @@ interface LaunchBody {
     voltage: Quantity;
     seriesResistance: Quantity;
     ratedVoltage?: Quantity;
+    supplyPower?: Quantity;
   };
   switch?: SwitchInput;
-  coil: CoilInput;
+  coil: CoilInput & { core?: CoreInput };
   blank: { diameter: Quantity; layers: Array<{ material: MaterialInput; thickness: Quantity }> };
   gap: Quantity;
   launchAngleDeg?: number;
@@ -114,7 +119,11 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
           : undefined,
       },
       switchRating: body.switch ? switchFromRequest(body.switch, '/body/switch') : undefined,
-      coil: { ...geometry, ...wire },
+      coil: {
+        ...geometry,
+        ...wire,
+        ...(body.coil.core ? { core: coreFromRequest(body.coil.core, '/body/coil/core') } : {}),
+      },
       blank: {
         diameterM: siFromRequest('length', body.blank.diameter, '/body/blank/diameter'),
         layers: blankLayersFromRequest(body.blank.layers, '/body/blank/layers', table),
@@ -123,7 +132,15 @@ export function estimatesRouter(catalogue: CatalogueStore, pool: EstimatePool): 
       launchAngleDeg: body.launchAngleDeg ?? 90,
       filaments: body.filaments,
     };
-    res.json(await pool.run({ kind: 'launch', input }));
+    const result = (await pool.run({ kind: 'launch', input })) as { energy: { storedJ: number } };
+    const supplyPowerW = body.bank.supplyPower
+      ? supplyPowerFromRequest(body.bank.supplyPower, '/body/bank/supplyPower')
+      : undefined;
+    res.json(
+      supplyPowerW === undefined
+        ? result
+        : { ...result, chargeTimeS: chargeTime(result.energy.storedJ, supplyPowerW) },
+    );
   });
 
   return router;

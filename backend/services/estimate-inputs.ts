@@ -15,7 +15,12 @@ import type { ConductorLayer } from '../../shared/physics/dodd-deeds';
 import type { StackLayer } from '../../shared/physics/stack';
 import { IACS_100_S_PER_M } from '../../shared/units/conductivity';
 import { InvalidQuantityError, UnknownUnitError } from '../../shared/units/errors';
-import { toAmpereSquaredSeconds, toAmperes } from '../../shared/units/pulse-ratings';
+import {
+  toAmpereSquaredSeconds,
+  toAmperes,
+  toTeslas,
+  toWatts,
+} from '../../shared/units/pulse-ratings';
 import type { Quantity } from '../../shared/units/quantity';
 import { siFromRequest } from '../http/quantity';
 import { ProblemError } from '../http/problem';
@@ -255,6 +260,33 @@ function rating(convert: (v: number, u: string) => number, q: Quantity, path: st
     if (error instanceof InvalidQuantityError) throw invalid(`${path}/value`, error.message);
     throw error;
   }
+}
+
+/** An iron core in the drive coil's bore, as the request gives it. */
+export interface CoreInput {
+  radius: Quantity;
+  length: Quantity;
+  relativePermeability: number;
+  saturationFluxDensity: Quantity;
+}
+
+/** The core in SI; the engine checks it against the winding (radius within the bore). */
+export function coreFromRequest(core: CoreInput, path: string) {
+  return {
+    radiusM: siFromRequest('length', core.radius, `${path}/radius`),
+    lengthM: siFromRequest('length', core.length, `${path}/length`),
+    relativePermeability: core.relativePermeability,
+    saturationFluxDensityT: rating(
+      toTeslas,
+      core.saturationFluxDensity,
+      `${path}/saturationFluxDensity`,
+    ),
+  };
+}
+
+/** The output power of the supply that charges the bank, W. */
+export function supplyPowerFromRequest(power: Quantity, path: string): number {
+  return rating(toWatts, power, path);
 }
 
 /** The switch's non-repetitive surge current (A) and I²t (A²s) ratings. */

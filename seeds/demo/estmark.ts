@@ -69,6 +69,14 @@ export const demoStacks: DemoStack[] = [
     diameterM: 26.5 * mm,
     layers: [{ alloy: 'nickel-brass-coinage', thicknessM: 2.0 * mm }],
   },
+  {
+    slug: 'estmark-1-mark-solid',
+    name: 'Estmark 1 mark, first issue',
+    description:
+      'Solid gilding metal 95/5, the size of the plated 1 mark that replaced it; both still circulate (invented).',
+    diameterM: 19.0 * mm,
+    layers: [{ alloy: 'gilding-metal-c21000', thicknessM: 1.356 * mm }],
+  },
 ];
 
 export interface DemoReading {

@@ -908,6 +908,34 @@ export interface components {
             awg?: number;
             conductor?: components["schemas"]["Material"];
         };
+        /** @description The drive coil, as `Coil`, with an optional iron core in its bore. */
+        LaunchCoil: {
+            innerRadius: components["schemas"]["LengthQuantity"];
+            outerRadius: components["schemas"]["LengthQuantity"];
+            length: components["schemas"]["LengthQuantity"];
+            turns: number;
+            wireDiameter?: components["schemas"]["LengthQuantity"];
+            awg?: number;
+            conductor?: components["schemas"]["Material"];
+            core?: components["schemas"]["CoilCore"];
+        };
+        /** @description A coaxial core of laminated steel (or any material of linear relative permeability) in the coil's bore, flush with the face toward the blank and `length` long (it may reach beyond the winding). Treated as linear below saturation, laminated (no eddy currents in it) and without hysteresis; the answer reports the peak flux density in it and warns `core-saturation` above `saturationFluxDensity`. Its radius may not exceed the winding's inner radius (422 naming /body/coil/core). */
+        CoilCore: {
+            radius: components["schemas"]["LengthQuantity"];
+            length: components["schemas"]["LengthQuantity"];
+            relativePermeability: number;
+            saturationFluxDensity: components["schemas"]["FluxDensityQuantity"];
+        };
+        FluxDensityQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "T" | "mT";
+        };
+        PowerQuantity: {
+            value: number;
+            /** @enum {string} */
+            unit: "W" | "kW";
+        };
         SensorRequest: {
             coil: components["schemas"]["Coil"];
             liftOff: components["schemas"]["DistanceQuantity"];
@@ -972,13 +1000,15 @@ export interface components {
                 voltage: components["schemas"]["VoltageQuantity"];
                 seriesResistance: components["schemas"]["ResistanceQuantity"];
                 ratedVoltage?: components["schemas"]["VoltageQuantity"];
+                /** @description Output power of the supply that charges the bank (a bench supply, or a battery and inverter); the answer gives `chargeTimeS`, the stored energy over this power. */
+                supplyPower?: components["schemas"]["PowerQuantity"];
             };
             /** @description The switch's pulse ratings from its datasheet: non-repetitive surge current (I_TSM, a 10 ms half-sine at 50 Hz) and I²t. The pulse's peak current and ∫i²dt are compared with them (`switch-over-rating`). A 10 ms half-sine of peak I has I²t = I²·0.005 A²s. */
             switch?: {
                 surgeCurrentRating: components["schemas"]["CurrentQuantity"];
                 i2tRating: components["schemas"]["I2tQuantity"];
             };
-            coil: components["schemas"]["Coil"];
+            coil: components["schemas"]["LaunchCoil"];
             blank: {
                 diameter: components["schemas"]["LengthQuantity"];
                 /** @description From the face toward the coil upward; every layer needs a density. */
@@ -1008,8 +1038,16 @@ export interface components {
             rangeM: number;
             efficiency: number;
             massKg: number;
+            /** @description The drive coil's inductance away from the blank, with its core when it has one. */
             coilInductanceH: number;
             circuitResistanceOhm: number;
+            /** @description Time to charge the bank from empty at the given `bank.supplyPower`: stored energy over power (a constant-power charger; a resistor-fed supply takes longer). Only when `bank.supplyPower` was given. */
+            chargeTimeS?: number;
+            /** @description Only when the coil has a core. */
+            core?: {
+                /** @description The largest flux density in the core during the pulse (linear model), T. */
+                peakFluxDensityT: number;
+            };
             /** @description The drive coil as built, with heavy-build magnet wire (NEMA MW 1000 / IEC 60317 grade 2 overall diameters). */
             coil: {
                 /** @description DC resistance of the winding alone */
@@ -1039,10 +1077,10 @@ export interface components {
             }[];
             warnings: components["schemas"]["Warnings"];
         };
-        /** @description Something a practitioner must know beside the numbers. Codes (ours, stable): `magnetic-layer` (a magnetic material the estimate treats in a way that misleads), `coil-heating` (the winding's adiabatic temperature rise in one pulse, energy over wire mass × 385 J/(kg·K), above the 115 K that thermal class 155 (F) of IEC 60085 allows from a 40 °C ambient), `projectile-hazard` (apex above 2 m or kinetic energy above 1 J), `bank-over-rated-voltage` (charged above the bank's rated voltage), `switch-over-rating` (peak current or ∫i²dt above the switch's surge or I²t rating). */
+        /** @description Something a practitioner must know beside the numbers. Codes (ours, stable): `magnetic-layer` (a magnetic material the estimate treats in a way that misleads), `coil-heating` (the winding's adiabatic temperature rise in one pulse, energy over wire mass × 385 J/(kg·K), above the 115 K that thermal class 155 (F) of IEC 60085 allows from a 40 °C ambient), `projectile-hazard` (apex above 2 m or kinetic energy above 1 J), `bank-over-rated-voltage` (charged above the bank's rated voltage), `switch-over-rating` (peak current or ∫i²dt above the switch's surge or I²t rating), `core-saturation` (the core's peak flux density above its saturation flux density: the launch is overstated). */
         EstimateWarning: {
             /** @enum {string} */
-            code: "magnetic-layer" | "coil-heating" | "projectile-hazard" | "bank-over-rated-voltage" | "switch-over-rating";
+            code: "magnetic-layer" | "coil-heating" | "projectile-hazard" | "bank-over-rated-voltage" | "switch-over-rating" | "core-saturation";
             message: string;
         };
         /** @description Empty when there is nothing to say. */

@@ -81,6 +81,15 @@ export const unitLabels: Readonly<Record<string, string>> = {
   kV: 'kV',
   ohm: 'Ω',
   mohm: 'mΩ',
+  // Pulse ratings, flux density and power (shared/units/pulse-ratings.ts).
+  A: 'A',
+  kA: 'kA',
+  A2s: 'A²s',
+  kA2s: 'kA²s',
+  T: 'T',
+  mT: 'mT',
+  W: 'W',
+  kW: 'kW',
 };
 
 /** Capacitance codes for people: 'F' means farad only in a capacitance field. */

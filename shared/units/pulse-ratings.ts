@@ -34,3 +34,28 @@ export function toAmpereSquaredSeconds(value: number, unit: string): number {
   if (unit === 'kA2s' || unit === 'kA²s') return value * 1e6;
   throw new UnknownUnitError(unit, i2tUnits);
 }
+
+export const fluxDensityUnits = ['T', 'mT'] as const;
+export const powerUnits = ['W', 'kW'] as const;
+
+/**
+ * Magnetic flux density in teslas (a core's saturation flux density, as steel datasheets print it).
+ * @example toTeslas(1500, 'mT') // 1.5
+ */
+export function toTeslas(value: number, unit: string): number {
+  positive(value, 'flux density');
+  if (unit === 'T') return value;
+  if (unit === 'mT') return value * 1e-3;
+  throw new UnknownUnitError(unit, fluxDensityUnits);
+}
+
+/**
+ * Power in watts (the output of the supply that charges a bank).
+ * @example toWatts(0.5, 'kW') // 500
+ */
+export function toWatts(value: number, unit: string): number {
+  positive(value, 'power');
+  if (unit === 'W') return value;
+  if (unit === 'kW') return value * 1e3;
+  throw new UnknownUnitError(unit, powerUnits);
+}

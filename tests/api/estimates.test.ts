@@ -407,7 +407,7 @@ describe('bad input to the estimators: 4xx naming the field, never a hang or a 5
 });
 
 describe('GET /api/v1/stacks', () => {
-  it('lists the five demo coins of Estmark, marked invented, with mass and mean density', async () => {
+  it('lists the demo coins of Estmark (five denominations and the first-issue solid 1 mark), marked invented, with mass and mean density', async () => {
     const res = await request(app).get('/api/v1/stacks');
     expect(res.status).toBe(200);
     expect(res.body.items.map((s: { slug: string }) => s.slug)).toEqual([
@@ -416,6 +416,7 @@ describe('GET /api/v1/stacks', () => {
       'estmark-5-marks',
       'estmark-10-marks',
       'estmark-20-marks',
+      'estmark-1-mark-solid',
     ]);
     for (const s of res.body.items) {
       expect(s.invented).toBe(true);

@@ -150,7 +150,7 @@ const states: State[] = [
     ready: async (page) => {
       await page.getByRole('button', { name: 'Fire (simulated)' }).click();
       await page
-        .getByRole('region', { name: 'Launch of Estmark 5 marks' })
+        .getByRole('region', { name: 'Launch of Estmark 1 mark, first issue' })
         .waitFor({ timeout: 60_000 });
     },
   },

@@ -269,7 +269,7 @@ describe('on a 390 px phone', () => {
     await page.goto(`${product.url}/pulse-bench`);
     await page.getByRole('button', { name: 'Fire (simulated)' }).click();
     await page
-      .getByRole('region', { name: 'Launch of Estmark 5 marks' })
+      .getByRole('region', { name: 'Launch of Estmark 1 mark, first issue' })
       .waitFor({ timeout: 60_000 });
     expect((await measure(page)).scrollWidth).toBeLessThanOrEqual(PHONE.width);
     await page.screenshot({ path: shot('phone-pulse-bench-run'), fullPage: true });

@@ -216,7 +216,7 @@ describe('units everywhere, as a person reads every screen in Chromium', () => {
     await page.getByLabel('Wire (gauge or diameter)', { exact: true }).fill('0.405');
     await page.getByRole('button', { name: 'Fire (simulated)' }).click();
     await page
-      .getByRole('region', { name: 'Launch of Estmark 5 marks' })
+      .getByRole('region', { name: 'Launch of Estmark 1 mark, first issue' })
       .waitFor({ timeout: 60_000 });
     const text = await mainText(page);
     expect(text).toMatch(/Peak current\s*\d[\d.]*(?: × 10[⁻⁰-⁹]+)? A at/i);

@@ -33,7 +33,7 @@ export interface LabSettings {
 
 const mm = (value: number): LengthEntry => ({ value, unit: 'mm' });
 
-/** A small pencil probe and a bench launcher: 50 µF at 400 V into 100 turns of AWG 26. */
+/** A small pencil probe and Pulse Bench's launcher: 50 µF at 400 V into 100 turns of AWG 32. */
 export const defaultSettings: LabSettings = {
   sensor: { innerRadius: mm(2), outerRadius: mm(4), length: mm(2), turns: 100, liftOff: mm(0.5) },
   sweep: { fromKHz: 0.1, toKHz: 10000, points: 200 },
@@ -41,13 +41,13 @@ export const defaultSettings: LabSettings = {
   launch: {
     capacitanceUF: 50,
     voltageV: 400,
-    seriesResistanceOhm: 0.05,
+    seriesResistanceOhm: 0.1,
     coil: {
       innerRadius: mm(5),
-      outerRadius: mm(12),
-      length: mm(10),
+      outerRadius: mm(9.5),
+      length: mm(4),
       turns: 100,
-      wire: { value: 26, unit: 'awg' },
+      wire: { value: 32, unit: 'awg' },
     },
     gap: mm(0.5),
   },

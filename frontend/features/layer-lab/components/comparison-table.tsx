@@ -94,15 +94,25 @@ export function ComparisonTable({
           ))}
         </tbody>
       </table>
-      {results.some((r) => r.launchWarning) ? (
-        <ul className="border-t border-patina-50 px-3 py-2 text-xs text-copper-700">
-          {results
-            .filter((r) => r.launchWarning)
-            .map((r) => (
-              <li key={r.id}>
-                {r.name}: {r.launchWarning}
+      {results.some((r) => r.launchWarning || r.warnings.length) ? (
+        <ul
+          aria-label="Warnings"
+          className="flex flex-col gap-1 border-t border-patina-50 px-3 py-2 text-sm text-copper-700"
+        >
+          {results.flatMap((r) => [
+            ...r.warnings.map((w) => (
+              <li key={`${r.id}-${w.code}`}>
+                {r.name}: {w.message}
               </li>
-            ))}
+            )),
+            ...(r.launchWarning
+              ? [
+                  <li key={`${r.id}-launch`}>
+                    {r.name}, launch: {r.launchWarning}
+                  </li>,
+                ]
+              : []),
+          ])}
         </ul>
       ) : null}
     </div>

@@ -203,7 +203,12 @@ export function LayerLabRoute() {
       <p className="text-xs text-ink/70">
         Apparent conductivity is what an instrument calibrated on homogeneous, non-magnetic
         reference blocks would report (Dodd–Deeds model of an air-core probe). A magnetic core reads
-        poorly on such a scale: the fit residual says how poorly.
+        poorly on such a scale: the fit residual says how poorly. A thin plating of a better
+        conductor can read above its own bulk conductivity where its skin depth is near its
+        thickness (8 µm of copper on zinc reaches about 109 %IACS): the eddy currents, crowded into
+        the plating and reflected where it meets the poorer core, put the probe&apos;s impedance off
+        the curve of solid plates, nearest a plate better than either layer. Physics, not a fault,
+        and not a sign of silver.
       </p>
       <NominalCaution />
     </section>

@@ -5,6 +5,7 @@ import {
 } from '../../../../shared/physics/apparent-conductivity';
 import { buildDoddDeedsKernel } from '../../../../shared/physics/dodd-deeds';
 import { simulateLaunch } from '../../../../shared/physics/launch';
+import { apparentConductivityWarnings } from '../../../../shared/physics/sensor-warnings';
 import { frequencyForSkinDepth } from '../../../../shared/physics/skin-depth';
 import {
   stackConductivityOverDensity,
@@ -71,6 +72,7 @@ self.onmessage = (event: MessageEvent<CompareRequest>) => {
         conductivityOverDensity: stackConductivityOverDensity(stack),
         launchHeightM,
         launchWarning,
+        warnings: apparentConductivityWarnings(layers, points),
       };
     });
     post({ type: 'done', results, elapsedMs: performance.now() - started });

@@ -5,6 +5,7 @@ import type {
 import type { CoilGeometry } from '../../../../shared/physics/coil';
 import type { CapacitorBank, DriveCoil } from '../../../../shared/physics/launch';
 import type { Stack } from '../../../../shared/physics/stack';
+import type { EstimateWarning } from '../../../../shared/physics/warnings';
 
 /** What the page asks the comparison worker, all SI. */
 export interface CompareRequest {
@@ -27,6 +28,8 @@ export interface BlankResult {
   conductivityOverDensity: number;
   launchHeightM: number | null;
   launchWarning: string | null;
+  /** What the sweep must not be read without (a magnetic layer). */
+  warnings: EstimateWarning[];
 }
 
 export type CompareMessage =

@@ -86,6 +86,7 @@ export function CandidateList({ result }: { result: MatchResult }) {
                 {formatConductivity(c.correctedConductivitySPerM, units.conductivity)}
               </span>
             </p>
+            <p className="text-sm text-ink/70">{correctionInWords(c.correction)}</p>
             <ul className="mt-1 list-disc pl-5 text-sm">
               {c.reasons.map((reason) => (
                 <li key={reason}>{reasonInUnits(reason, units)}</li>
@@ -96,4 +97,20 @@ export function CandidateList({ result }: { result: MatchResult }) {
       </ol>
     </>
   );
+}
+
+type Correction = MatchResult['candidates'][number]['correction'];
+
+/** Whether and how the reading was brought to this alloy's reference temperature, in words. */
+function correctionInWords(c: Correction): string {
+  const alpha =
+    c.alphaPerK === undefined ? '' : ` (α = ${formatNumber(c.alphaPerK * 1e3, 3)} × 10⁻³ /K)`;
+  switch (c.kind) {
+    case 'recorded':
+      return `Temperature: corrected with this alloy's own coefficient${alpha}.`;
+    case 'estimated':
+      return `Temperature: corrected with an estimated coefficient${alpha}, by Matthiessen's rule; the fit allows for its uncertainty.`;
+    case 'none':
+      return `Temperature: not corrected${c.rule ? `, ${c.rule}` : ''}.`;
+  }
 }

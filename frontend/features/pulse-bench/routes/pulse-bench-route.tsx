@@ -1,106 +1,63 @@
 import { useState } from 'react';
 import { capacitanceLabel } from '../../../../shared/units/codes';
-import { LengthField, NumberField, WireField, wireProblem } from '../../../components/length-field';
+import { LengthField, NumberField, WireField } from '../../../components/length-field';
 import { BankCaution, bankInSi } from '../../../components/bank-caution';
 import { NominalCaution } from '../../../components/nominal-caution';
 import { ProblemMessage } from '../../../components/problem-message';
 import { draftFromBuiltIn, useBuiltInStacks } from '../../../lib/built-in-stacks';
-import { useSavedStacks, type LengthEntry, type StackDraft } from '../../../lib/stack-drafts';
-import { useRunLaunches, type LaunchRequest } from '../api/run-launch';
+import { useSavedStacks, type StackDraft } from '../../../lib/stack-drafts';
+import { useRunLaunches, type LaunchResult } from '../api/run-launch';
 import { BinPlacement } from '../components/bin-placement';
+import { BuildReport, type SwitchRatings } from '../components/build-report';
+import { CoreFields, SwitchFields } from '../components/bench-options';
 import { CurrentForceChart } from '../components/launch-charts';
 import { LaunchSummary } from '../components/launch-summary';
+import {
+  bankPresets,
+  benchRequest,
+  initialBench,
+  validateBench,
+  type BankPresetId,
+  type BenchForm,
+} from '../lib/bench-form';
 
-interface BenchForm {
-  capacitance: LengthEntry;
-  voltage: LengthEntry;
-  seriesResistance: LengthEntry;
-  innerRadius: LengthEntry;
-  outerRadius: LengthEntry;
-  length: LengthEntry;
-  turns: number;
-  /** A gauge ('awg') or a bare diameter (mm, mil). */
-  wire: LengthEntry;
-  gap: LengthEntry;
-  angleDeg: number;
-  blankA: string;
-  blankB: string;
+/** One launch as run: which blank, with or without the core. */
+interface Variant {
+  blank: StackDraft;
+  cored: boolean;
 }
 
-const mm = (value: number): LengthEntry => ({ value, unit: 'mm' });
-const initial: BenchForm = {
-  capacitance: { value: 50, unit: 'uF' },
-  voltage: { value: 400, unit: 'V' },
-  seriesResistance: { value: 50, unit: 'mohm' },
-  innerRadius: mm(5),
-  outerRadius: mm(12),
-  length: mm(10),
-  turns: 100,
-  wire: { value: 26, unit: 'awg' },
-  gap: mm(0.5),
-  angleDeg: 45,
-  blankA: 'estmark-5-marks',
-  blankB: 'estmark-1-mark',
-};
-
-const ok = (e: LengthEntry, zero = false) =>
-  Number.isFinite(e.value) && (zero ? e.value >= 0 : e.value > 0);
-
-function validate(f: BenchForm): Record<string, string> {
-  const e: Record<string, string> = {};
-  if (!ok(f.capacitance)) e.capacitance = 'greater than zero';
-  if (!ok(f.voltage)) e.voltage = 'greater than zero';
-  if (!ok(f.seriesResistance, true)) e.seriesResistance = 'zero or more';
-  if (!ok(f.innerRadius)) e.innerRadius = 'greater than zero';
-  if (!ok(f.outerRadius)) e.outerRadius = 'greater than zero';
-  if (!ok(f.length)) e.length = 'greater than zero';
-  if (!ok(f.gap, true)) e.gap = 'zero or more';
-  if (!Number.isInteger(f.turns) || f.turns < 1) e.turns = 'a whole number, 1 or more';
-  const wire = wireProblem(f.wire);
-  if (wire) e.wire = wire;
-  if (!Number.isFinite(f.angleDeg) || f.angleDeg < 1 || f.angleDeg > 90)
-    e.angleDeg = '1 to 90 degrees';
-  return e;
+/** A's and B's air-core launches, then their cored ones when the core is on: side by side. */
+function variantsFor(blanks: StackDraft[], withCore: boolean): Variant[] {
+  return blanks.flatMap((blank) =>
+    withCore
+      ? [
+          { blank, cored: false },
+          { blank, cored: true },
+        ]
+      : [{ blank, cored: false }],
+  );
 }
 
-type Req = LaunchRequest;
-/** The selects offer only codes openapi.yaml accepts; this narrows the typed-in entry to them. */
-const as = <T,>(e: LengthEntry) => ({ value: e.value, unit: e.unit }) as T;
-type Len = Req['gap'];
+const variantName = (v: Variant, compared: boolean) =>
+  compared ? `${v.blank.name}, ${v.cored ? 'cored coil' : 'air-core coil'}` : v.blank.name;
 
-function requestFor(f: BenchForm, blank: StackDraft): LaunchRequest {
-  return {
-    bank: {
-      capacitance: as<Req['bank']['capacitance']>(f.capacitance),
-      voltage: as<Req['bank']['voltage']>(f.voltage),
-      seriesResistance: as<Req['bank']['seriesResistance']>(f.seriesResistance),
-    },
-    coil: {
-      innerRadius: as<Len>(f.innerRadius),
-      outerRadius: as<Len>(f.outerRadius),
-      length: as<Len>(f.length),
-      turns: f.turns,
-      ...(f.wire.unit === 'awg' ? { awg: f.wire.value } : { wireDiameter: as<Len>(f.wire) }),
-    },
-    blank: {
-      diameter: as<Len>(blank.diameter),
-      layers: blank.layers.map((l) => ({
-        material: { alloy: l.alloy },
-        thickness: as<Len>(l.thickness),
-      })),
-    },
-    gap: as<Len>(f.gap),
-    launchAngleDeg: f.angleDeg,
-  };
+function switchRatingsOf(f: BenchForm): SwitchRatings | undefined {
+  if (!f.checkSwitch) return undefined;
+  const amps = f.surgeCurrent.value * (f.surgeCurrent.unit === 'kA' ? 1e3 : 1);
+  const i2t = f.i2tRating.value * (f.i2tRating.unit === 'kA2s' ? 1e6 : 1);
+  return { surgeCurrentA: amps, i2tA2s: i2t };
 }
 
 export function PulseBenchRoute() {
   const builtIns = useBuiltInStacks();
   const [saved] = useSavedStacks();
-  const [form, setForm] = useState(initial);
+  const [form, setForm] = useState(initialBench);
+  const [ran, setRan] = useState<{ variants: Variant[]; form: BenchForm } | null>(null);
   const launches = useRunLaunches();
-  const errors = validate(form);
+  const errors = validateBench(form);
   const set = (patch: Partial<BenchForm>) => setForm({ ...form, ...patch });
+  const setBank = (patch: Partial<BenchForm>) => set({ ...patch, bankPreset: 'custom' });
 
   const choices: StackDraft[] = [
     ...(builtIns.data?.items.map(draftFromBuiltIn) ?? []),
@@ -133,6 +90,12 @@ export function PulseBenchRoute() {
     </label>
   );
 
+  const results =
+    launches.data && ran ? ran.variants.map((v, i) => ({ v, r: launches.data[i]! })) : [];
+  const compared = ran?.form.withCore ?? false;
+  // The bins are placed for the bench as configured: the cored launches when there is a core.
+  const forBins = results.filter((x) => x.v.cored === compared);
+
   return (
     <section aria-labelledby="bench-title" className="flex flex-col gap-5">
       <header>
@@ -155,32 +118,67 @@ export function PulseBenchRoute() {
         onSubmit={(e) => {
           e.preventDefault();
           if (Object.keys(errors).length || !blankA) return;
-          launches.mutate(chosen.map((b) => requestFor(form, b)));
+          const variants = variantsFor(chosen, form.withCore);
+          setRan({ variants, form });
+          launches.mutate(variants.map((v) => benchRequest(form, v.blank, v.cored)));
         }}
       >
         <fieldset className="flex flex-wrap gap-3">
           <legend className="mb-1 text-sm font-semibold">Bank</legend>
+          <label className="flex w-full flex-col gap-1 text-sm sm:w-auto">
+            <span className="font-medium">Start from</span>
+            <select
+              className="rounded border border-patina-300 bg-white px-2 py-1"
+              value={form.bankPreset}
+              onChange={(e) => {
+                const id = e.target.value as BankPresetId | 'custom';
+                if (id === 'custom') set({ bankPreset: id });
+                else set({ bankPreset: id, ...bankPresets[id].fields });
+              }}
+            >
+              {Object.entries(bankPresets).map(([id, p]) => (
+                <option key={id} value={id}>
+                  {p.label}
+                </option>
+              ))}
+              <option value="custom">Your own figures</option>
+            </select>
+          </label>
           <LengthField
             label="Capacitance"
             entry={form.capacitance}
             units={['uF', 'F']}
             labelFor={capacitanceLabel}
             error={errors.capacitance}
-            onChange={(capacitance) => set({ capacitance })}
+            onChange={(capacitance) => setBank({ capacitance })}
           />
           <LengthField
-            label="Voltage"
+            label="Charge voltage"
             entry={form.voltage}
             units={['V', 'kV']}
             error={errors.voltage}
-            onChange={(voltage) => set({ voltage })}
+            onChange={(voltage) => setBank({ voltage })}
+          />
+          <LengthField
+            label="Rated voltage"
+            entry={form.ratedVoltage}
+            units={['V', 'kV']}
+            error={errors.ratedVoltage}
+            onChange={(ratedVoltage) => setBank({ ratedVoltage })}
           />
           <LengthField
             label="Series resistance"
             entry={form.seriesResistance}
             units={['mohm', 'ohm']}
             error={errors.seriesResistance}
-            onChange={(seriesResistance) => set({ seriesResistance })}
+            onChange={(seriesResistance) => setBank({ seriesResistance })}
+          />
+          <LengthField
+            label="Charger output power"
+            entry={form.supplyPower}
+            units={['W', 'kW']}
+            error={errors.supplyPower}
+            onChange={(supplyPower) => setBank({ supplyPower })}
           />
         </fieldset>
         <fieldset className="flex flex-wrap gap-3">
@@ -211,6 +209,8 @@ export function PulseBenchRoute() {
           />
           <WireField entry={form.wire} error={errors.wire} onChange={(wire) => set({ wire })} />
         </fieldset>
+        <CoreFields form={form} errors={errors} set={set} />
+        <SwitchFields form={form} errors={errors} set={set} />
         <fieldset className="flex flex-wrap items-start gap-3">
           <legend className="mb-1 text-sm font-semibold">Blanks and launcher</legend>
           {blankSelect('Blank', form.blankA, (blankA) => set({ blankA }), false)}
@@ -249,30 +249,78 @@ export function PulseBenchRoute() {
       {launches.isError ? (
         <ProblemMessage error={launches.error} title="The launch could not be simulated" />
       ) : null}
-      {launches.data ? (
+      {results.length ? (
         <div className="flex flex-col gap-5" aria-live="polite">
-          {launches.data.map((result, i) => (
-            <div key={chosen[i]!.id} className="grid gap-4 xl:grid-cols-2">
-              <LaunchSummary result={result} name={chosen[i]!.name} />
-              <CurrentForceChart result={result} name={chosen[i]!.name} />
+          {chosen.length && compared ? (
+            <p className="text-sm">
+              Each blank on the air-core coil and on the same coil with the core, side by side.
+            </p>
+          ) : null}
+          {groupByBlank(results).map((group) => (
+            <div key={group[0]!.v.blank.id} className="grid gap-4 xl:grid-cols-2">
+              {group.map(({ v, r }) => (
+                <LaunchColumn
+                  key={`${v.blank.id}-${v.cored}`}
+                  result={r}
+                  name={variantName(v, compared)}
+                  switchRatings={switchRatingsOf(ran!.form)}
+                  chart={!compared}
+                />
+              ))}
             </div>
           ))}
-          {launches.data.length === 2 && form.angleDeg < 90 ? (
+          {forBins.length === 2 && ran!.form.angleDeg < 90 ? (
             <BinPlacement
-              a={launches.data[0]!}
-              b={launches.data[1]!}
-              nameA={chosen[0]!.name}
-              nameB={chosen[1]!.name}
+              a={forBins[0]!.r}
+              b={forBins[1]!.r}
+              nameA={forBins[0]!.v.blank.name}
+              nameB={forBins[1]!.v.blank.name}
             />
           ) : null}
         </div>
       ) : null}
       <p className="text-xs text-ink/70">
         Model: coupled circuits of the bank, the coil and the blank as rings of current (Maxwell
-        mutual inductances), integrated until the blank leaves the field; no air drag, magnetic
-        layers treated as non-magnetic.
+        mutual inductances), integrated until the blank leaves the field; a core is a linear
+        magnetic body below saturation; no air drag, magnetic layers of the blank treated as
+        non-magnetic.
       </p>
       <NominalCaution />
     </section>
+  );
+}
+
+function groupByBlank<T extends { v: Variant }>(rows: T[]): T[][] {
+  const groups = new Map<string, T[]>();
+  for (const row of rows) groups.set(row.v.blank.id, [...(groups.get(row.v.blank.id) ?? []), row]);
+  return [...groups.values()];
+}
+
+function LaunchColumn({
+  result,
+  name,
+  switchRatings,
+  chart,
+}: {
+  result: LaunchResult;
+  name: string;
+  switchRatings?: SwitchRatings;
+  chart: boolean;
+}) {
+  const figures = (
+    <div className="flex flex-col gap-3">
+      <LaunchSummary result={result} name={name} />
+      <BuildReport result={result} switchRatings={switchRatings} />
+    </div>
+  );
+  // Alone, a launch takes both columns: its figures beside its chart. Compared, each variant
+  // takes one column and the figures stand side by side.
+  return chart ? (
+    <>
+      {figures}
+      <CurrentForceChart result={result} name={name} />
+    </>
+  ) : (
+    figures
   );
 }
