@@ -10,6 +10,7 @@ import { useRunLaunches, type LaunchRequest } from '../api/run-launch';
 import { BinPlacement } from '../components/bin-placement';
 import { CurrentForceChart } from '../components/launch-charts';
 import { LaunchSummary } from '../components/launch-summary';
+import { HowDoWeKnow } from '../../../components/how-do-we-know';
 
 interface BenchForm {
   capacitance: LengthEntry;
@@ -143,6 +144,7 @@ export function PulseBenchRoute() {
           A capacitor bank discharged through a drive coil under a blank: how hard it is thrown, and
           where it lands.
         </p>
+        <HowDoWeKnow />
       </header>
       <BankCaution
         capacitanceF={bankInSi(form.capacitance, 'F')}
