@@ -45,6 +45,7 @@ import { staticClient } from './http/static-client';
 import { refuseNonFinite } from './http/refuse-non-finite';
 import { clientDist } from './paths';
 import { alloysRouter } from './routes/alloys';
+import { checksRouter } from './routes/checks';
 import { curationRouter } from './routes/curation';
 import { createCurationService } from './services/curation';
 import { createReleaseService } from './services/releases';
@@ -54,6 +55,7 @@ import { matchRouter } from './routes/match';
 import { readingsRouter } from './routes/readings';
 import { stacksRouter } from './routes/stacks';
 import { CatalogueStore } from './services/catalogue-store';
+import { createChecksService } from './services/checks';
 
 export interface AppOptions {
   knex: Knex;
@@ -184,7 +186,9 @@ export function createApp(options: AppOptions): Express {
   v1.use(matchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
   v1.use(stacksRouter(createStackRepository(knex), catalogue));
-  v1.use(estimatesRouter(catalogue, options.estimatePool ?? createEstimatePool()));
+  const estimatePool = options.estimatePool ?? createEstimatePool();
+  v1.use(estimatesRouter(catalogue, estimatePool));
+  v1.use(checksRouter(createChecksService(estimatePool, catalogue)));
   v1.use(authRouter(accounts, credentialThrottles(credentials), production));
   v1.use(meRouter(repos));
   v1.use(keysRouter(keys, repos));

@@ -1,7 +1,11 @@
 import type { Knex } from 'knex';
+import type { CitedValue } from '../shared/catalogue/citation-coverage';
+import type { QuantityName } from '../shared/catalogue/alloy-record';
 import { IACS_100_S_PER_M } from '../shared/units/conductivity';
 import { ROOM_TEMPERATURE_K } from '../shared/units/temperature';
 import { alloys, type AlloySeed, type Triple } from './reference/alloys';
+import { quotedFigures } from './reference/quoted-figures';
+import { quotedLineFor } from './reference/quoted-line';
 import { sources } from './reference/sources';
 
 /** Conductivity triple in S/m; a resistivity maximum is the conductivity minimum. */
@@ -20,7 +24,7 @@ function conductivityTriple(seed: AlloySeed): Triple {
 
 interface PropertyRow {
   alloy_id: number;
-  quantity: string;
+  quantity: QuantityName;
   nominal: number;
   min: number | null;
   max: number | null;
@@ -28,6 +32,8 @@ interface PropertyRow {
   reference_temperature_k: number;
   condition: string | null;
   source_id: number;
+  /** What the located source prints for this value (reference/quoted-line.ts), or null. */
+  quoted: string | null;
 }
 
 /** Rows of property_values for one alloy, SI inside. */
@@ -39,7 +45,7 @@ export function propertyRows(seed: AlloySeed, alloyId: number): PropertyRow[] {
   };
   const [cn, cmin, cmax] = conductivityTriple(seed);
   const [dn, dmin, dmax] = seed.densityGPerCm3;
-  const rows: PropertyRow[] = [
+  const rows: Array<Omit<PropertyRow, 'quoted'>> = [
     {
       ...base,
       quantity: 'conductivity',
@@ -82,7 +88,26 @@ export function propertyRows(seed: AlloySeed, alloyId: number): PropertyRow[] {
       source_id: seed.magnetic.source,
     });
   }
-  return rows;
+  return rows.map((row) => ({
+    ...row,
+    quoted: quotedLineFor(quotedFigures, seed.slug, row.quantity, row.source_id),
+  }));
+}
+
+/**
+ * Every value the seed loads, with the kind of its source (null when the id has no source row),
+ * for `npm run table:report` and the tests; read from the seed data, no database needed.
+ */
+export function referenceValues(): CitedValue[] {
+  const kindOf = new Map(sources.map((s) => [s.id, s.kind]));
+  return alloys.flatMap((a, index) =>
+    propertyRows(a, index + 1).map((row) => ({
+      slug: a.slug,
+      quantity: row.quantity,
+      sourceId: row.source_id,
+      kind: kindOf.get(row.source_id) ?? null,
+    })),
+  );
 }
 
 /** Resets the reference table (sources, alloys, values) and loads it with explicit ids. */

@@ -31,6 +31,7 @@ interface ValueRow {
   reference_temperature_k: number;
   condition: string | null;
   source_id: number;
+  quoted: string | null;
   citation: string;
   kind: SourceKind;
   locator: string | null;
@@ -70,6 +71,7 @@ export function createAlloyRepository(knex: Knex): AlloyRepository {
             locator: v.locator,
             url: v.url,
           },
+          quoted: v.quoted,
         });
         byAlloy.set(v.alloy_id, list);
       }

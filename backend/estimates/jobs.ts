@@ -12,6 +12,7 @@ import {
 import { simulateLaunch, type LaunchInput } from '../../shared/physics/launch';
 import { apparentConductivityWarnings } from '../../shared/physics/sensor-warnings';
 import type { EstimateWarning } from '../../shared/physics/warnings';
+import { runEngineChecks } from '../../shared/checks/engine-checks';
 import { percentIacs } from '../../shared/units/conductivity';
 import { kernelFor } from './kernel-cache';
 
@@ -29,8 +30,13 @@ export interface LaunchJob {
   input: Omit<LaunchInput, 'deadline'>;
 }
 
+/** The engine against its references (GET /api/v1/checks): fixed inputs, nothing from a caller. */
+export interface ChecksJob {
+  kind: 'checks';
+}
+
 /** A calculation as it crosses into a worker thread: SI numbers only, already validated. */
-export type EstimateJob = (SensorJob | LaunchJob) & { computeLimitMs: number };
+export type EstimateJob = (SensorJob | LaunchJob | ChecksJob) & { computeLimitMs: number };
 
 /**
  * What comes back. Expected failures travel as values, not thrown errors, because an Error's
@@ -113,6 +119,7 @@ function launch(job: LaunchJob, deadline: number) {
 export function runEstimateJob(job: EstimateJob): EstimateOutcome {
   const deadline = performance.now() + job.computeLimitMs;
   try {
+    if (job.kind === 'checks') return { ok: true, value: runEngineChecks() };
     if (job.kind === 'launch') return { ok: true, value: launch(job, deadline) };
     if (job.kind === 'impedance') return { ok: true, value: impedancePoints(job, deadline) };
     return { ok: true, value: apparentConductivity(job, deadline) };

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
 import { ProblemError } from '../http/problem';
-import type { EstimateOutcome, LaunchJob, SensorJob } from './jobs';
+import type { ChecksJob, EstimateOutcome, LaunchJob, SensorJob } from './jobs';
 
 export interface EstimatePoolOptions {
   /** Worker threads; by default one core is left to the event loop. */
@@ -15,6 +15,12 @@ export interface EstimatePoolOptions {
 }
 
 export const DEFAULT_COMPUTE_LIMIT_MS = 5000;
+/**
+ * The engine checks' own limit. Their inputs are fixed, not a caller's, and they take a few
+ * hundred milliseconds (measured: 0.2 s on one core); a deployment's tight limit for callers'
+ * calculations must not make them fail, and a thread stuck for this long is still stopped.
+ */
+export const CHECKS_COMPUTE_LIMIT_MS = 20_000;
 /** Time a thread gets past the limit to notice its own deadline before it is stopped. */
 const GRACE_MS = 500;
 const WATCH_EVERY_MS = 100;
@@ -34,7 +40,7 @@ function workerFile(): { filename: string; execArgv: string[] } {
 export interface EstimatePool {
   readonly computeLimitMs: number;
   /** Runs a job on a worker thread; resolves with the response body or throws a ProblemError. */
-  run(job: SensorJob | LaunchJob): Promise<unknown>;
+  run(job: SensorJob | LaunchJob | ChecksJob): Promise<unknown>;
   /** Threads busy and jobs waiting, for the health check and the bench. */
   load(): { running: number; queued: number; threads: number };
   close(): Promise<void>;
@@ -50,7 +56,7 @@ export function createEstimatePool(options: EstimatePoolOptions = {}): EstimateP
   const computeLimitMs = options.computeLimitMs ?? DEFAULT_COMPUTE_LIMIT_MS;
   const maxQueue = options.maxQueue ?? threads * 4;
   let piscina: Piscina | undefined;
-  const running = new Set<{ started: Float64Array; abort: AbortController }>();
+  const running = new Set<{ started: Float64Array; abort: AbortController; limitMs: number }>();
   let watchdog: NodeJS.Timeout | undefined;
 
   // Started on first use: most processes that build the app (tests, the CLI) never estimate.
@@ -68,7 +74,7 @@ export function createEstimatePool(options: EstimatePoolOptions = {}): EstimateP
         const now = Date.now();
         for (const task of running) {
           const started = task.started[0]!;
-          if (started > 0 && now - started > computeLimitMs + GRACE_MS) task.abort.abort();
+          if (started > 0 && now - started > task.limitMs + GRACE_MS) task.abort.abort();
         }
       }, WATCH_EVERY_MS);
       watchdog.unref();
@@ -76,35 +82,47 @@ export function createEstimatePool(options: EstimatePoolOptions = {}): EstimateP
     return piscina;
   };
 
-  const tooSlow = () =>
-    new ProblemError(
-      422,
-      'Unprocessable content',
-      `The calculation needs more than the ${computeLimitMs / 1000} s this service allows: ask for fewer points, filaments or layers.`,
-    );
+  const tooSlow = (job: { kind: string }) =>
+    job.kind === 'checks'
+      ? // Nothing the caller sent made it slow: the server is overloaded, so "try later".
+        new ProblemError(
+          503,
+          'Service unavailable',
+          'The engine checks did not finish in time: try again shortly.',
+          undefined,
+          { 'Retry-After': String(Math.ceil(computeLimitMs / 1000)) },
+        )
+      : new ProblemError(
+          422,
+          'Unprocessable content',
+          `The calculation needs more than the ${computeLimitMs / 1000} s this service allows: ask for fewer points, filaments or layers.`,
+        );
 
   return {
     computeLimitMs,
     async run(job) {
       const p = pool();
       if (p.queueSize >= maxQueue) throw busy(computeLimitMs);
+      const limitMs =
+        job.kind === 'checks' ? Math.max(computeLimitMs, CHECKS_COMPUTE_LIMIT_MS) : computeLimitMs;
       const task = {
         started: new Float64Array(new SharedArrayBuffer(Float64Array.BYTES_PER_ELEMENT)),
         abort: new AbortController(),
+        limitMs,
       };
       running.add(task);
       try {
         const outcome = (await p.run(
-          { job: { ...job, computeLimitMs }, started: task.started },
+          { job: { ...job, computeLimitMs: limitMs }, started: task.started },
           { signal: task.abort.signal },
         )) as EstimateOutcome;
         if (outcome.ok) return outcome.value;
-        if (outcome.kind === 'too-slow') throw tooSlow();
+        if (outcome.kind === 'too-slow') throw tooSlow(job);
         throw new ProblemError(422, 'Unprocessable content', outcome.message, [
           { path: outcome.field, message: outcome.message },
         ]);
       } catch (error) {
-        if (task.abort.signal.aborted) throw tooSlow();
+        if (task.abort.signal.aborted) throw tooSlow(job);
         if (error instanceof Error && /queue is at limit/i.test(error.message))
           throw busy(computeLimitMs);
         throw error;

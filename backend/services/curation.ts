@@ -198,7 +198,8 @@ export function createCurationService(
       if (row) {
         await trx('property_values')
           .where({ id: row.id })
-          .update({ ...next, source_id: ctx.sourceId });
+          // The reviewed revision's source replaces the seed's, and with it the seed's quote.
+          .update({ ...next, source_id: ctx.sourceId, quoted: null });
         await history(
           trx,
           slug,
@@ -220,6 +221,7 @@ export function createCurationService(
           reference_temperature_k: ROOM_K,
           condition: set.condition ?? alloy.condition ?? null,
           source_id: ctx.sourceId,
+          quoted: null,
         });
         await history(trx, slug, `values.${quantity}`, undefined, next, ctx);
       }

@@ -164,9 +164,14 @@ export function Layout() {
         <Outlet />
       </main>
       <footer className="border-t border-patina-100 text-xs text-ink/70">
-        <div className="mx-auto max-w-6xl px-4 py-3">
-          Conductory: conductivity and density of metals and alloys, every value with its source.
-          Values at 20 °C unless stated.
+        <div className="mx-auto flex max-w-6xl flex-wrap justify-between gap-x-4 gap-y-1 px-4 py-3">
+          <p>
+            Conductory: conductivity and density of metals and alloys, every value with its source.
+            Values at 20 °C unless stated.
+          </p>
+          <NavLink to="/checks" className="text-patina-700 underline underline-offset-2">
+            How we check the engine and the table
+          </NavLink>
         </div>
       </footer>
     </div>

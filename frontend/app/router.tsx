@@ -101,6 +101,12 @@ export const router = createBrowserRouter([
             }),
           },
           {
+            path: 'checks',
+            lazy: async () => ({
+              Component: (await import('../features/checks/routes/checks-route')).ChecksRoute,
+            }),
+          },
+          {
             path: 'sign-in',
             lazy: async () => ({
               Component: (await import('../features/access/routes/sign-in-route')).SignInRoute,

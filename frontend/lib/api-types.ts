@@ -11,3 +11,5 @@ export type MatchCandidate = Schemas['MatchCandidate'];
 export type Reading = Schemas['Reading'];
 export type Problem = Schemas['Problem'];
 export type Family = Schemas['Family'];
+export type Checks = Schemas['Checks'];
+export type EngineCheck = Schemas['EngineCheck'];

@@ -114,6 +114,43 @@ export function formatFrequency(hz: number): string {
   return `${formatTick(hz)} Hz`;
 }
 
+const SI_PREFIXES: Array<[number, string]> = [
+  [1e9, 'G'],
+  [1e6, 'M'],
+  [1e3, 'k'],
+  [1, ''],
+  [1e-3, 'm'],
+  [1e-6, 'µ'],
+  [1e-9, 'n'],
+  [1e-12, 'p'],
+];
+
+/**
+ * A value of an SI unit that takes prefixes (H, Ω, m, S/m, H/m, J) with the prefix that puts its
+ * figure between 1 and 1000: 0.2259 H → "225.9 mH" with digits 4. Not for kg/m³ or %IACS.
+ */
+export function formatSiPrefixed(value: number, unit: string, digits = 3): string {
+  if (!Number.isFinite(value)) return '—';
+  const abs = Math.abs(value);
+  const [scale, prefix] =
+    abs === 0
+      ? [1, '']
+      : (SI_PREFIXES.find(([s]) => abs >= s * (1 - 1e-12)) ?? SI_PREFIXES.at(-1)!);
+  return `${formatNumber(value / scale, digits)} ${prefix}${unitLabel(unit)}`;
+}
+
+/** A relative difference or tolerance as a percentage: 3.9e-4 → "0.039 %", 2e-15 → "2.0 × 10⁻¹³ %". */
+export function formatRelativePercent(ratio: number, digits = 2): string {
+  if (ratio === 0) return '0 %';
+  return `${formatTick(ratio * 100, digits)} %`;
+}
+
+/** A part of a whole as a percentage to one decimal ("6.0 %"), so a column of shares lines up. */
+export function formatShare(part: number, whole: number): string {
+  if (whole === 0) return '—';
+  return `${((100 * part) / whole).toFixed(1)} %`;
+}
+
 /** A length in metres, in m, mm or µm as its size suits, to three significant figures. */
 export function formatLength(m: number): string {
   if (!Number.isFinite(m)) return '—';

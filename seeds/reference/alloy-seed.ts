@@ -2,7 +2,9 @@
  * The reference table: metals and alloys with conductivity, density, the temperature coefficient of
  * resistivity where known, and relative permeability for the magnetic ones. Values at 20 °C.
  * Written in the units the handbooks use (%IACS or µΩ·cm, g/cm³); the seed converts to SI.
- * Source ids refer to ./sources.ts. Ranges cover the spread between handbooks and tempers.
+ * Source ids refer to ./sources.ts. Ranges cover the spread between handbooks and tempers. A
+ * temperature coefficient is kept only where a located source prints it; Match estimates the rest
+ * at run time (shared/match/temperature-estimate.ts) and says so.
  */
 export type Family =
   | 'copper'
@@ -40,13 +42,4 @@ export interface AlloySeed {
   alpha?: { value: number; source: number };
   magnetic?: { relativePermeability: Triple; source: number };
   notes?: string;
-}
-
-const MATTHIESSEN = 10;
-
-/** Matthiessen's rule: α20 = (dρ/dT of the base metal) / ρ20, both in µΩ·cm. */
-export function matthiessen(base: 'Cu' | 'Al' | 'Zn', iacs: number) {
-  const slope = { Cu: 0.0068, Al: 0.0114, Zn: 0.025 }[base];
-  const rho = 172.41 / iacs;
-  return { value: Number((slope / rho).toPrecision(3)), source: MATTHIESSEN };
 }

@@ -30,22 +30,6 @@ export const baseSources: SourceRow[] = [
     url: 'https://copper.org/applications/industrial/DesignGuide/props/designations.php',
   },
   {
-    id: 3,
-    citation:
-      'Mill data sheets for C26000 per ASTM B36 (several agree): density 0.308 lb/in³ at 68 °F, resistivity 6.16 µΩ·cm annealed',
-    kind: 'handbook',
-    locator: 'physical properties table',
-    url: null,
-  },
-  {
-    id: 4,
-    citation:
-      'CRC Handbook of Chemistry and Physics, 97th ed. (2016), section 12, "Electrical resistivity of pure metals" (recalled, not re-checked)',
-    kind: 'from_memory',
-    locator: 'resistivity at 293 K',
-    url: null,
-  },
-  {
     id: 5,
     citation:
       'CRC Handbook of Chemistry and Physics, 97th ed. (2016), section 4, "Physical constants of inorganic compounds": densities of the elements (recalled, not re-checked)',
@@ -78,22 +62,6 @@ export const baseSources: SourceRow[] = [
     url: null,
   },
   {
-    id: 9,
-    citation:
-      'ASTM B230 and IEC 60889, hard-drawn 1350 aluminium conductor wire: 61.0 %IACS minimum, α20 = 0.00403 /K (recalled, not re-checked)',
-    kind: 'from_memory',
-    locator: 'conductivity and temperature coefficient clauses',
-    url: null,
-  },
-  {
-    id: 10,
-    citation:
-      "Estimate by Matthiessen's rule: α20 = (dρ/dT of the base metal) / ρ20, with dρ/dT ≈ 0.0068 µΩ·cm/K for copper, 0.0114 for aluminium, 0.025 for zinc (recalled; not a handbook value; not valid for copper-nickel or magnetic alloys)",
-    kind: 'from_memory',
-    locator: null,
-    url: null,
-  },
-  {
     id: 11,
     citation:
       'Coinage alloy figures as commonly quoted by strip suppliers (recalled; no handbook table located)',
@@ -107,23 +75,6 @@ export const baseSources: SourceRow[] = [
       'Relative permeability of soft magnetic metals at low field, typical ranges (recalled; strongly dependent on field, temper and history)',
     kind: 'from_memory',
     locator: null,
-    url: null,
-  },
-  {
-    id: 13,
-    citation:
-      'Published mill data sheets for copper-nickel C70600 and C71500, annealed (ASTM B122/B111 products)',
-    kind: 'handbook',
-    locator:
-      'C70600: 9.0 %IACS, 19.1 µΩ·cm, 8.94 g/cm³; C71500: 4.6 %IACS, 37.5 µΩ·cm, 8.94 g/cm³ at 20 °C',
-    url: null,
-  },
-  {
-    id: 14,
-    citation: 'Aluminium mill data sheet for 6061 quoting Aluminum Association typical values',
-    kind: 'handbook',
-    locator:
-      '6061: 43 %IACS in T6 and T651, 47 %IACS in O temper, 40 %IACS in T451; density 2.70 g/cm³ at 20 °C',
     url: null,
   },
 ];

@@ -21,6 +21,29 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/checks": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * The engine against its references, and the table's citation coverage
+         * @description Every external check the engine passes (TEAM Workshop Problem 15-1, skin depths, Maxwell's
+         *     mutual inductance against mpmath, the apparent-conductivity limits, the launch's energy
+         *     ledger), recomputed by this server on the first call and kept for its lifetime; and the
+         *     live table's values counted by the kind of their source.
+         */
+        get: operations["getChecks"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/alloys": {
         parameters: {
             query?: never;
@@ -703,6 +726,46 @@ export interface components {
             /** @description Published alloys in the table. */
             alloys: number;
         };
+        EngineCheck: {
+            /** @description Stable name of the check. */
+            id: string;
+            title: string;
+            /** @description What is compared: inductance, skin depth… */
+            quantity: string;
+            /** @description The engine's answer, in `unit`. */
+            ours: number;
+            /** @description The reference figure, in `unit`. */
+            reference: number;
+            /** @description SI unit of ours and reference: H, ohm, m, S/m, H/m, J */
+            unit: string;
+            /** @description |ours − reference| / |reference| */
+            relativeDifference: number;
+            /** @description Largest relative difference that passes. */
+            tolerance: number;
+            pass: boolean;
+            /** @description Where the reference figure comes from. */
+            source: string;
+        };
+        SourceKindCount: {
+            handbook: number;
+            standard: number;
+            paper: number;
+            measurement_set: number;
+            from_memory: number;
+        };
+        Checks: {
+            engine: components["schemas"]["EngineCheck"][];
+            /** @description The published table's values by the kind of their source. */
+            table: {
+                /** @description Values in the published table. */
+                values: number;
+                /** @description Values whose source is a located document. */
+                cited: number;
+                /** @description Values whose citation was not re-checked. */
+                fromMemory: number;
+                byKind: components["schemas"]["SourceKindCount"];
+            };
+        };
         /** @enum {string} */
         Family: "copper" | "copper-zinc" | "copper-nickel" | "aluminium" | "zinc" | "nickel" | "iron-steel" | "precious" | "other";
         /**
@@ -764,6 +827,8 @@ export interface components {
             referenceTemperatureK: number;
             condition: string | null;
             source: components["schemas"]["Source"];
+            /** @description What the located source prints for this value, where it prints it, in its own unit ("Table 2: 28 %IACS at 20 °C (annealed)"). Null for a value from memory or one a curator changed; absent in releases made before quotes were stored. */
+            quoted?: string | null;
         };
         Alloy: {
             slug: string;
@@ -1290,6 +1355,27 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["Health"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getChecks: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The engine's checks and the table's coverage. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["Checks"];
                 };
             };
             default: components["responses"]["Problem"];

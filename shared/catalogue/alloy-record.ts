@@ -22,6 +22,12 @@ export interface PropertyValueRecord {
   referenceTemperatureK: number;
   condition: string | null;
   source: SourceRecord;
+  /**
+   * What the located source prints for this value, as a plain line ("Table 2: 28 %IACS at 20 °C
+   * (annealed)"); null for a value from memory or one a curator changed. Absent in release
+   * snapshots made before quotes were stored.
+   */
+  quoted?: string | null;
 }
 
 export interface AlloyRecord {

@@ -154,6 +154,13 @@ const states: State[] = [
         .waitFor({ timeout: 60_000 });
     },
   },
+  {
+    name: 'checks',
+    who: 'visitor',
+    path: '/checks',
+    ready: (page) =>
+      page.getByRole('heading', { name: 'The engine against its references' }).waitFor(),
+  },
   { name: 'sign-in', who: 'visitor', path: '/sign-in', ready: heading('Sign in') },
   {
     name: 'sign-in-refused',

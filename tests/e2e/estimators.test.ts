@@ -103,6 +103,32 @@ describe('the estimators, as a person uses them in Chromium', () => {
     await session.page.screenshot({ path: shot('e2e-alloy-sheet-skin-depth'), fullPage: true });
   });
 
+  it('“How do we know?” leads from a calculator to the Checks, where every engine check passes', async () => {
+    const page = session.page;
+    await page.goto(`${session.url}/pulse-bench`);
+    await page.getByRole('link', { name: 'How do we know?' }).click();
+    await page.getByRole('heading', { name: 'Checks', level: 1 }).waitFor();
+    const table = page.getByRole('table', {
+      name: "The engine's answers against their references",
+    });
+    await table.waitFor({ timeout: 60_000 });
+    const rows = table.locator('tbody tr');
+    // TEAM 15-1 (4), skin depths (4), Maxwell (18), apparent conductivity (5), launch ledger (1).
+    await expect(rows.count()).resolves.toBe(32);
+    const results = await rows.evaluateAll((trs) =>
+      trs.map((tr) => {
+        const cells = [...tr.querySelectorAll('td')];
+        return `${cells[0]?.textContent ?? ''}: ${cells[5]?.textContent?.trim() ?? ''}`;
+      }),
+    );
+    expect(results.filter((r) => !r.endsWith('✓ Pass'))).toEqual([]);
+    await expect(page.getByText('32 of 32 checks pass.').isVisible()).resolves.toBe(true);
+    await expect(
+      page.getByRole('heading', { name: "Where the table's values come from" }).isVisible(),
+    ).resolves.toBe(true);
+    await page.screenshot({ path: shot('e2e-checks'), fullPage: true });
+  });
+
   it('raised no error in the page', () => {
     expect(session.pageErrors).toEqual([]);
   });

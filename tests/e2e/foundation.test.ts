@@ -51,6 +51,13 @@ describe('the foundation, as a person uses it in Chromium', () => {
     await expect(
       session.page.getByText(/Copper Development Association/).count(),
     ).resolves.toBeGreaterThan(0);
+    // A located source's citation links to its public address (sources-base.ts, source 2).
+    await expect(
+      session.page
+        .getByRole('link', { name: /Copper Development Association/ })
+        .first()
+        .getAttribute('href'),
+    ).resolves.toMatch(/^https:\/\/copper\.org\//);
     await expect(
       session.page.getByText('from memory', { exact: true }).count(),
     ).resolves.toBeGreaterThan(0);

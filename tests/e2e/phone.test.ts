@@ -99,6 +99,12 @@ const routes: Array<{
     ready: (p) => p.getByRole('heading', { name: 'Pulse Bench', level: 1 }).waitFor(),
   },
   {
+    name: 'checks',
+    who: 'visitor',
+    path: '/checks',
+    ready: (p) => p.getByRole('heading', { name: 'The engine against its references' }).waitFor(),
+  },
+  {
     name: 'sign-in',
     who: 'visitor',
     path: '/sign-in',

@@ -8,6 +8,8 @@ import {
   type QuotedUnit,
 } from '../../seeds/reference/quoted-figures';
 import { IACS_100_S_PER_M } from '../../shared/units/conductivity';
+import { citationCoverage } from '../../shared/catalogue/citation-coverage';
+import { referenceValues } from '../../seeds/01_reference_table';
 
 /**
  * Every value the table cites from a located document agrees with the figure that document prints
@@ -120,5 +122,22 @@ describe('the reference table against the figures its located sources print', ()
       }
     }
     expect(missing).toEqual([]);
+  });
+});
+
+describe("the table's coverage (issue 11)", () => {
+  it('holds at least 100 metals and alloys', () => {
+    expect(alloys.length).toBeGreaterThanOrEqual(100);
+  });
+
+  it('cites a located source for at least 90 % of its values', () => {
+    const coverage = citationCoverage(referenceValues());
+    expect(coverage.cited / coverage.values).toBeGreaterThanOrEqual(0.9);
+  });
+
+  it('keeps no source row that no value cites', () => {
+    const cited = new Set(referenceValues().map((v) => v.sourceId));
+    const unused = sources.filter((s) => !cited.has(s.id)).map((s) => s.id);
+    expect(unused).toEqual([]);
   });
 });

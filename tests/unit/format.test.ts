@@ -2,6 +2,9 @@ import { describe, expect, it } from 'vitest';
 import {
   conductivityQuantityName,
   describeValueChange,
+  formatRelativePercent,
+  formatShare,
+  formatSiPrefixed,
   fieldName,
   formatConductivity,
   formatConductivityOverDensity,
@@ -40,6 +43,30 @@ describe('one number style (issue 9, item 2)', () => {
     expect(formatFrequency(1e6)).toBe('1 MHz');
     // δ of copper at 1 MHz, 65.8 µm (tests/e2e/estimators.test.ts)
     expect(formatLength(65.8e-6)).toBe('65.8 µm');
+  });
+
+  it('writes SI figures with the prefix that suits them (the Checks screen)', () => {
+    // TEAM 15-1's L0 and ΔR, physics.md
+    expect(formatSiPrefixed(225.9e-3, 'H', 4)).toBe('225.9 mH');
+    expect(formatSiPrefixed(120.67, 'ohm', 5)).toBe('120.67 Ω');
+    expect(formatSiPrefixed(8.53e-3, 'm')).toBe('8.53 mm');
+    expect(formatSiPrefixed(-7.183656729e-7, 'H/m', 4)).toBe('-718.4 nH/m');
+    expect(formatSiPrefixed(58e6, 'S/m')).toBe('58.0 MS/m');
+    expect(formatSiPrefixed(1e-3, 'H')).toBe('1.00 mH');
+    expect(formatSiPrefixed(0, 'J')).toBe('0.00 J');
+  });
+
+  it('writes relative differences and tolerances as percentages, × 10ⁿ when tiny', () => {
+    expect(formatRelativePercent(3.89e-4)).toBe('0.039 %');
+    expect(formatRelativePercent(1e-3)).toBe('0.1 %');
+    expect(formatRelativePercent(2.14e-15)).toBe('2.1 × 10⁻¹³ %');
+    expect(formatRelativePercent(0)).toBe('0 %');
+  });
+
+  it('writes shares of a whole to one decimal', () => {
+    expect(formatShare(10, 167)).toBe('6.0 %');
+    expect(formatShare(157, 167)).toBe('94.0 %');
+    expect(formatShare(0, 0)).toBe('—');
   });
 });
 

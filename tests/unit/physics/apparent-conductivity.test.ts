@@ -5,10 +5,11 @@ import {
   conductivityLimits,
 } from '../../../shared/physics/apparent-conductivity';
 import { buildDoddDeedsKernel, type ConductorLayer } from '../../../shared/physics/dodd-deeds';
+import { APPARENT_CONDUCTIVITY } from '../../../shared/checks/references';
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
-const SENSOR = { innerRadiusM: 2e-3, outerRadiusM: 4e-3, lengthM: 2e-3, turns: 100 };
-const kernel = buildDoddDeedsKernel(SENSOR, 0.5e-3);
+const A = APPARENT_CONDUCTIVITY;
+const kernel = buildDoddDeedsKernel(A.sensor, A.liftOffM);
 const CU = 58e6;
 const ZN = 27.5 * 0.58e6;
 const layer = (sigma: number, t: number | null): ConductorLayer => ({
@@ -16,7 +17,7 @@ const layer = (sigma: number, t: number | null): ConductorLayer => ({
   relativePermeability: 1,
   thicknessM: t,
 });
-const platedZinc = [layer(CU, 8e-6), layer(ZN, 1.34e-3), layer(CU, 8e-6)];
+const platedZinc = A.lowFrequency.layers;
 
 describe('apparent conductivity', () => {
   // SciPy minimize_scalar on its own Dodd–Deeds integral (generate.py); 1e-4 relative covers our
@@ -28,26 +29,32 @@ describe('apparent conductivity', () => {
     expect(Math.abs(p!.fitResidual - c.fitResidual)).toBeLessThan(1e-4);
   });
 
-  it('reads a homogeneous plate as its own conductivity at every frequency', () => {
-    const points = apparentConductivitySweep(kernel, [layer(32.5e6, 1.75e-3)], [100, 1e4, 1e6]);
+  const { solidBlock, lowFrequency, thickPlating } = A;
+  it(`reads a homogeneous plate as its own conductivity at every frequency (${solidBlock.source})`, () => {
+    const points = apparentConductivitySweep(kernel, solidBlock.layers, solidBlock.frequenciesHz);
     for (const p of points) {
-      expect(rel(p.apparentConductivitySPerM, 32.5e6)).toBeLessThan(1e-5);
+      expect(rel(p.apparentConductivitySPerM, solidBlock.conductivitySPerM)).toBeLessThan(
+        solidBlock.tolerance,
+      );
       expect(p.fitResidual).toBeLessThan(1e-5);
     }
   });
 
-  it('tends to the thickness-weighted mean at low frequency (physics.md)', () => {
+  it(`tends to the thickness-weighted mean at low frequency (${lowFrequency.source})`, () => {
     const limits = conductivityLimits(platedZinc);
-    const [low] = apparentConductivitySweep(kernel, platedZinc, [30]);
+    const [low] = apparentConductivitySweep(kernel, platedZinc, [lowFrequency.frequencyHz]);
     expect(rel(low!.apparentConductivitySPerM, limits.thicknessWeightedMeanSPerM!)).toBeLessThan(
-      0.005,
+      lowFrequency.tolerance,
     );
   });
 
-  it('tends to the face layer at high frequency (physics.md)', () => {
-    const copperOnZinc = [layer(CU, 50e-6), layer(ZN, 1.3e-3)];
-    const [high] = apparentConductivitySweep(kernel, copperOnZinc, [2e7]);
-    expect(rel(high!.apparentConductivitySPerM, CU)).toBeLessThan(0.02);
+  it(`tends to the face layer at high frequency (${thickPlating.source})`, () => {
+    const [high] = apparentConductivitySweep(kernel, thickPlating.layers, [
+      thickPlating.frequencyHz,
+    ]);
+    expect(rel(high!.apparentConductivitySPerM, thickPlating.conductivitySPerM)).toBeLessThan(
+      thickPlating.tolerance,
+    );
   });
 
   it('gives a half-space its own σ as the low-frequency limit and no weighted mean', () => {

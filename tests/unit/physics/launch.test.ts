@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import fixture from '../../fixtures/physics/launch.json';
-import { awgDiameter } from '../../../shared/physics/awg';
+import { LAUNCH } from '../../../shared/checks/references';
 import { ballistics, simulateLaunch, type LaunchInput } from '../../../shared/physics/launch';
 import { STANDARD_GRAVITY } from '../../../shared/physics/constants';
 import type { StackLayer } from '../../../shared/physics/stack';
@@ -13,22 +12,9 @@ const layer = (iacs: number, density: number, t: number): StackLayer => ({
   thicknessM: t,
 });
 
-const f = fixture.case;
+const { fixture } = LAUNCH;
 /** The fixture's case: 50 µF at 400 V into 100 turns of AWG 26, a 23 mm gilding-metal blank. */
-const base: LaunchInput = {
-  bank: { capacitanceF: f.bank.C, voltageV: f.bank.V, seriesResistanceOhm: f.bank.R },
-  coil: {
-    innerRadiusM: f.coil.r1,
-    outerRadiusM: f.coil.r2,
-    lengthM: f.coil.h,
-    turns: f.coil.n,
-    wireDiameterM: awgDiameter(26),
-    conductorSPerM: 58e6,
-  },
-  blank: { diameterM: f.blank.D, layers: [layer(56, f.blank.rho, f.blank.t)] },
-  gapM: f.gap,
-  launchAngleDeg: 90,
-};
+const base: LaunchInput = LAUNCH.input;
 const solid = simulateLaunch(base);
 
 describe('pulsed launch against the SciPy solve_ivp fixture of the same model', () => {
@@ -45,12 +31,12 @@ describe('pulsed launch against the SciPy solve_ivp fixture of the same model', 
 });
 
 describe('pulsed launch properties', () => {
-  it('balances its energy ledger within 1 % of the stored energy', () => {
+  it(`balances its energy ledger within 1 % of the stored energy (${LAUNCH.ledger.source})`, () => {
     const e = solid.energy;
     expect(
       Math.abs(e.storedJ - e.coilLossJ - e.blankLossJ - e.kineticJ - e.residualJ) / e.storedJ,
-    ).toBeLessThan(0.01);
-    expect(Math.abs(e.imbalanceJ) / e.storedJ).toBeLessThan(0.01);
+    ).toBeLessThan(LAUNCH.ledger.tolerance);
+    expect(Math.abs(e.imbalanceJ) / e.storedJ).toBeLessThan(LAUNCH.ledger.tolerance);
   });
 
   it('changes the exit speed by less than 2 % with more filaments', () => {

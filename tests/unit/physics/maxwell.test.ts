@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import fixtures from '../../fixtures/physics/maxwell.json';
+import { MAXWELL } from '../../../shared/checks/references';
 import { MU0 } from '../../../shared/physics/constants';
 import { coilFilaments, selfInductanceFromFilaments } from '../../../shared/physics/coil';
 import {
@@ -13,18 +13,21 @@ const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 describe("Maxwell's mutual inductance of coaxial loops", () => {
   // physics.md's figures were computed with µ0 = 4π×10⁻⁷; ours is CODATA 2018's, 5.5e-10 away.
-  it('gives 4.9407846308e-7 H and dM/dd = −7.183656729e-7 H/m at a = b = d = 1 m (physics.md [C], Neumann integral)', () => {
-    expect(rel(mutualInductance(1, 1, 1), 4.9407846308e-7)).toBeLessThan(1e-9);
-    expect(rel(mutualInductanceGradient(1, 1, 1), -7.183656729e-7)).toBeLessThan(1e-9);
+  const u = MAXWELL.unitLoops;
+  it(`gives 4.9407846308e-7 H and dM/dd = −7.183656729e-7 H/m at a = b = d = 1 m (${u.source})`, () => {
+    expect(rel(mutualInductance(u.a, u.b, u.d), u.mutualInductanceH)).toBeLessThan(u.tolerance);
+    expect(rel(mutualInductanceGradient(u.a, u.b, u.d), u.gradientHPerM)).toBeLessThan(u.tolerance);
   });
 
   // Fixture: mpmath at 30 digits (tests/fixtures/physics/generate.py). Tolerance 1e-12, and 1e-8
   // for the near-touching pair (d/a = 1e-4), where K(m) has its logarithmic singularity.
-  it.each(fixtures.cases)('matches mpmath for a=$a b=$b d=$d', ({ a, b, d, M, dMdd }) => {
-    const tolerance = d / Math.min(a, b) < 1e-3 ? 1e-8 : 1e-12;
+  const m = MAXWELL.mpmath;
+  it.each(m.cases)(`matches mpmath for a=$a b=$b d=$d (${m.source})`, (c) => {
+    const { a, b, d, M, dMdd } = c;
+    const tolerance = m.tolerance(c);
     expect(rel(mutualInductance(a, b, d), M), `M(${a},${b},${d})`).toBeLessThan(tolerance);
     expect(rel(mutualInductanceGradient(a, b, d), dMdd), `dM/dd(${a},${b},${d})`).toBeLessThan(
-      tolerance * 10,
+      tolerance * m.gradientFactor,
     );
     const [m2, g2] = mutualInductanceAndGradient(a, b, d);
     expect(m2).toBe(mutualInductance(a, b, d));

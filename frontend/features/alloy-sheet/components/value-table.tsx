@@ -30,6 +30,9 @@ const sourceKindLabels: Record<string, string> = {
   from_memory: 'from memory',
 };
 
+/** Only a web address becomes a link (a citation's url is data, never a script). */
+const webAddress = (url: string | null) => (url && /^https?:\/\//i.test(url) ? url : null);
+
 /** One value in the chosen display unit: its nominal and its range. */
 function describe(
   value: PropertyValue,
@@ -68,6 +71,7 @@ export function ValueTable({ values, units }: { values: PropertyValue[]; units: 
         <tbody>
           {values.map((v) => {
             const shown = describe(v, units);
+            const href = webAddress(v.source.url);
             return (
               <tr key={v.quantity} className="border-t border-patina-50 align-top">
                 <th scope="row" className="px-3 py-2 text-left font-medium">
@@ -93,9 +97,27 @@ export function ValueTable({ values, units }: { values: PropertyValue[]; units: 
                       {sourceKindLabels[v.source.kind]}
                     </span>
                   )}
-                  <span className="block">{v.source.citation}</span>
+                  <span className="block">
+                    {href ? (
+                      <a
+                        href={href}
+                        className="text-patina-700 underline underline-offset-2"
+                        rel="noopener noreferrer"
+                      >
+                        {v.source.citation}
+                      </a>
+                    ) : (
+                      v.source.citation
+                    )}
+                  </span>
                   {v.source.locator ? (
                     <span className="block text-xs text-ink/60">{v.source.locator}</span>
+                  ) : null}
+                  {v.quoted ? (
+                    <span className="mt-1 block text-xs">
+                      <span className="font-medium">The source prints: </span>
+                      {v.quoted}
+                    </span>
                   ) : null}
                 </td>
               </tr>

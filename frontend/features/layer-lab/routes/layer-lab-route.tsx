@@ -20,6 +20,7 @@ import { SettingsPanel } from '../components/settings-panel';
 import { blankDraft, StackEditor } from '../components/stack-editor';
 import { defaultSettings, requestFromSettings, validateSettings } from '../settings';
 import { useComparison } from '../use-comparison';
+import { HowDoWeKnow } from '../../../components/how-do-we-know';
 
 const MAX_BLANKS = 4;
 
@@ -90,6 +91,7 @@ export function LayerLabRoute() {
             Build plated, clad and solid blanks and compare what a probe reads from each across
             frequency.
           </p>
+          <HowDoWeKnow />
         </div>
         <UnitSwitcher />
       </header>

@@ -5,6 +5,7 @@ import { useRunMatch } from '../api/run-match';
 import { CandidateList } from '../components/candidate-list';
 import { MatchForm } from '../components/match-form';
 import { MatchPlot } from '../components/match-plot';
+import { HowDoWeKnow } from '../../../components/how-do-we-know';
 
 export function MatchRoute() {
   const readings = useReadings();
@@ -19,6 +20,7 @@ export function MatchRoute() {
           A reading in, the alloys that could give it out. Each reading is corrected to the
           table&apos;s 20 °C with each alloy&apos;s own temperature coefficient.
         </p>
+        <HowDoWeKnow />
       </header>
       <div className="grid gap-5 lg:grid-cols-[24rem_1fr]">
         <MatchForm

@@ -20,6 +20,7 @@ import {
   type BankPresetId,
   type BenchForm,
 } from '../lib/bench-form';
+import { HowDoWeKnow } from '../../../components/how-do-we-know';
 
 /** One launch as run: which blank, with or without the core. */
 interface Variant {
@@ -106,6 +107,7 @@ export function PulseBenchRoute() {
           A capacitor bank discharged through a drive coil under a blank: how hard it is thrown, and
           where it lands.
         </p>
+        <HowDoWeKnow />
       </header>
       <BankCaution
         capacitanceF={bankInSi(form.capacitance, 'F')}
