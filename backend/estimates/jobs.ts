@@ -102,6 +102,7 @@ function launch(job: LaunchJob, deadline: number) {
     coilInductanceH: result.coilInductanceH,
     circuitResistanceOhm: result.circuitResistanceOhm,
     coil: result.coil,
+    ...(result.core ? { core: result.core } : {}),
     energy: {
       storedJ: energy.storedJ,
       coilLossJ: energy.coilLossJ,

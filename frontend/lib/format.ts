@@ -131,6 +131,8 @@ const SI_PREFIXES: Array<[number, string]> = [
  */
 export function formatSiPrefixed(value: number, unit: string, digits = 3): string {
   if (!Number.isFinite(value)) return '—';
+  // A pure number ('1': a ratio, a magnetization per unit field) takes no prefix and no unit.
+  if (unit === '1') return formatNumber(value, digits);
   const abs = Math.abs(value);
   const [scale, prefix] =
     abs === 0

@@ -736,7 +736,7 @@ export interface components {
             ours: number;
             /** @description The reference figure, in `unit`. */
             reference: number;
-            /** @description SI unit of ours and reference: H, ohm, m, S/m, H/m, J */
+            /** @description SI unit of ours and reference: H, ohm, m, S/m, H/m, J, or 1 for a pure number */
             unit: string;
             /** @description |ours − reference| / |reference| */
             relativeDifference: number;

@@ -13,6 +13,16 @@ import {
   rectangleGmd,
   thinRingSelfInductance,
 } from './maxwell';
+import {
+  coreCoupling,
+  coreMutualInductance,
+  cylinderCoreCells,
+  DEFAULT_CORE_MESH,
+  factorCore,
+  type CoreCoupling,
+  type CoreRing,
+  type CoreSpec,
+} from './magnetic-core';
 import { integrateRk45, StepLimitError } from './rk45';
 import { stackMass, type Stack } from './stack';
 import {
@@ -25,6 +35,8 @@ import {
 } from './warnings';
 import { COPPER_DENSITY_KG_PER_M3, fillFactor, heavyBuildDiameter, wireMass } from './winding';
 import { ComputeTimeExceededError } from './apparent-conductivity';
+
+export type { CoreSpec } from './magnetic-core';
 
 export interface CapacitorBank {
   capacitanceF: number;
@@ -53,6 +65,11 @@ export interface DriveCoil extends CoilGeometry {
   overallDiameterM?: number;
   /** Density of the conductor, kg/m³; annealed copper when not given. */
   conductorDensityKgPerM3?: number;
+  /**
+   * A coaxial magnetic core in the bore, its face flush with the coil face toward the blank
+   * (magnetic-core.ts); an air core when not given.
+   */
+  core?: CoreSpec;
 }
 
 /** The drive coil as built: its winding's own figures. */
@@ -71,6 +88,10 @@ export interface FilamentCounts {
   blankRadial: number;
   /** Filaments through the thickness of each layer. */
   blankPerLayer: number;
+  /** Ring cells of a magnetic core across its radius, when the coil has one. */
+  coreRadial: number;
+  /** Ring cells of a magnetic core along its length. */
+  coreAxial: number;
 }
 
 export interface LaunchInput {
@@ -124,6 +145,12 @@ export interface LaunchResult {
   series: LaunchSeriesPoint[];
   /** What a bench builder must know beside the numbers (warnings.ts). */
   warnings: EstimateWarning[];
+  /**
+   * The magnetic core, when the coil has one: the largest flux density in it over the pulse, T,
+   * as the mean over a cross-section of the core (the flux it carries over its area; the blank's
+   * eddy currents included). Locally, at the edge next to the winding, it runs higher.
+   */
+  core?: { peakFluxDensityT: number };
 }
 
 export const DEFAULT_FILAMENTS: FilamentCounts = {
@@ -131,6 +158,10 @@ export const DEFAULT_FILAMENTS: FilamentCounts = {
   coilAxial: 4,
   blankRadial: 8,
   blankPerLayer: 2,
+  // 144 cells: the core's share of the default coil's inductance within 1.5 % of a fine
+  // finite-volume solve, in about 40 ms (docs/cored-coil.md).
+  coreRadial: DEFAULT_CORE_MESH.radial,
+  coreAxial: DEFAULT_CORE_MESH.axial,
 };
 
 interface BlankFilament extends Filament {
@@ -278,6 +309,70 @@ function positiveDefinite(matrix: Float64Array, n: number): boolean {
   return true;
 }
 
+const CORE_FIELD = '/body/coil/core';
+
+/**
+ * A core the moment method can take: a positive, finite radius and length, a radius within the
+ * winding's bore (the model puts the whole winding outside the core), a linear magnetic material
+ * (finite µr ≥ 1) and a positive saturation flux density to warn against.
+ */
+function requireCore(core: CoreSpec, coil: DriveCoil): void {
+  const positive = (x: number) => Number.isFinite(x) && x > 0;
+  if (!positive(core.radiusM) || !positive(core.lengthM))
+    throw new OutsideModelError(
+      CORE_FIELD,
+      `a core needs a positive, finite radius and length (given ${core.radiusM} m and ${core.lengthM} m)`,
+    );
+  if (core.radiusM > coil.innerRadiusM)
+    throw new OutsideModelError(
+      CORE_FIELD,
+      `a core of ${metres(core.radiusM)} radius does not fit the winding's bore of ${metres(coil.innerRadiusM)} radius: the model puts the core inside the winding`,
+    );
+  if (!(Number.isFinite(core.relativePermeability) && core.relativePermeability >= 1))
+    throw new OutsideModelError(
+      CORE_FIELD,
+      `a core's relative permeability must be a finite number of at least 1 (given ${core.relativePermeability}): the model takes linear magnetic materials, not diamagnetic ones`,
+    );
+  if (!positive(core.saturationFluxDensityT))
+    throw new OutsideModelError(
+      CORE_FIELD,
+      `a core needs a positive, finite saturation flux density (given ${core.saturationFluxDensityT} T)`,
+    );
+}
+
+/**
+ * The core, when the coil has one, cut into cells and factored once (magnetic-core.ts); the
+ * winding's extra self-inductance from it, H.
+ */
+function prepareCore(coil: DriveCoil, coilCells: Filament[], counts: FilamentCounts) {
+  if (!coil.core) return undefined;
+  requireCore(coil.core, coil);
+  const mesh = {
+    radial: Math.max(1, Math.round(counts.coreRadial)),
+    axial: Math.max(1, Math.round(counts.coreAxial)),
+  };
+  let factored;
+  try {
+    factored = factorCore(
+      cylinderCoreCells(coil.core.radiusM, coil.core.lengthM, mesh),
+      coil.core.relativePermeability,
+    );
+  } catch (error) {
+    if (!(error instanceof RangeError)) throw error;
+    throw new OutsideModelError(
+      '/body/filaments',
+      "the core's moment-method system came out singular: cut the core into more cells (filaments.coreRadial, filaments.coreAxial)",
+    );
+  }
+  return {
+    spec: coil.core,
+    factored,
+    extraInductanceH: coreMutualInductance(factored, coilCells.map(asRing)),
+  };
+}
+
+const asRing = (f: Filament): CoreRing => ({ radiusM: f.radiusM, zM: f.zM, turns: f.turns });
+
 const COARSE_FILAMENTS =
   'use more filaments (filaments.coilRadial, coilAxial, blankRadial), each then small against the gap, or a wider gap';
 
@@ -323,7 +418,14 @@ function invert(matrix: Float64Array, n: number): Float64Array {
  * integrated with adaptive RK45 until the blank has left the field (the circuit holds under
  * 0.01 % of the stored energy and the force is below a thousandth of its peak, or the blank is
  * three coil radii away). Mutuals by Maxwell,
- * self-inductances by the thin-ring formula. The blank rests on the coil face until the force
+ * self-inductances by the thin-ring formula.
+ *
+ * With a magnetic core in the bore (`coil.core`, magnetic-core.ts) every inductance gains the
+ * core's share: L1 a constant one, the coil–blank mutuals one that depends on s, and the blank's
+ * own matrix Lb(s) too (its eddy currents and their image in the core). The circuit is then
+ * d/dt(L(s)·i) + R·i = v, that is L·i̇ = v − R·i − v_s·L′(s)·i, with the force ½·iᵀ·L′(s)·i
+ * = i1·Σ M′k·ik + ½·ibᵀ·Lb′·ib, so the energy ledger still closes. Without a core the
+ * arithmetic is exactly that of the air-core model. The blank rests on the coil face until the force
  * lifts it. No air drag; height and range are those of a point mass leaving from where the
  * simulation ends, at the speed it has there ({@link ballistics}): the apex counts the rise made
  * during the pulse.
@@ -347,7 +449,11 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     'drive coil',
     'give more coil filaments (filaments.coilRadial, filaments.coilAxial), or a winding section small against its radius',
   );
-  const l1 = selfInductanceFromFilaments(coilCells);
+  const core = prepareCore(coil, coilCells, counts);
+  // With a core the winding's inductance includes the core's share (constant: both are fixed).
+  const l1 = core
+    ? selfInductanceFromFilaments(coilCells) + core.extraInductanceH
+    : selfInductanceFromFilaments(coilCells);
   const windingOhm = windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
   const r1 = bank.seriesResistanceOhm + windingOhm;
   const pulseHz = 1 / (2 * Math.PI * Math.sqrt(l1 * bank.capacitanceF));
@@ -372,8 +478,11 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       'the blank conducts too little to carry an eddy current this model can compute: its layers need a conductivity',
     );
   const nb = cells.length;
+  const exitDistance = 3 * coil.outerRadiusM;
+  const coreTables = core && coreTablesFor(core.factored, coilCells, cells, exitDistance);
 
-  // The blank's own inductance matrix is constant (it moves rigidly): invert it once.
+  // In air the blank's own inductance matrix is constant (it moves rigidly): invert it once. Over
+  // a core it depends on s as well (the eddy currents' image in the core): `lbNow` below.
   const lb = new Float64Array(nb * nb);
   for (let i = 0; i < nb; i++) {
     const a = cells[i]!;
@@ -394,7 +503,11 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   }
   // The circuits must store energy for any currents: a matrix that is not positive definite lets
   // them make it, and the integration runs away (1e148 A from a 33 J bank).
-  if (!positiveDefinite(lb, nb))
+  if (
+    !positiveDefinite(lb, nb) ||
+    (coreTables &&
+      !positiveDefinite(coreTables.at(0, lb, new Float64Array(nb), new Float64Array(nb)).lb, nb))
+  )
     throw new OutsideModelError(
       '/body/filaments',
       `the blank's filaments couple more tightly than their self-inductances allow: ${COARSE_FILAMENTS}`,
@@ -403,7 +516,11 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
 
   const mk = new Float64Array(nb);
   const dmk = new Float64Array(nb);
-  /** Coil-to-filament mutuals and their gradients with the blank displaced by s. */
+  // Over a core: the blank's inductance matrix at s, its s-derivative and the inverse used below.
+  let lbNow = lb;
+  let lbInvNow = lbInv;
+  let dlbNow = new Float64Array(nb * nb);
+  /** Coil-to-filament mutuals and their gradients with the blank displaced by s (and, over a core, the blank's own matrix at s). */
   const coupling = (s: number) => {
     for (let k = 0; k < nb; k++) {
       const f = cells[k]!;
@@ -416,6 +533,10 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       }
       mk[k] = m;
       dmk[k] = dm;
+    }
+    if (coreTables) {
+      ({ lb: lbNow, dlb: dlbNow } = coreTables.at(s, lb, mk, dmk));
+      lbInvNow = invert(lbNow, nb);
     }
   };
 
@@ -441,7 +562,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   let shielded = l1;
   for (let r = 0; r < nb; r++) {
     let su = 0;
-    for (let c = 0; c < nb; c++) su += lbInv[r * nb + c]! * mk[c]!;
+    for (let c = 0; c < nb; c++) su += lbInvNow[r * nb + c]! * mk[c]!;
     shielded -= mk[r]! * su;
   }
   if (!(shielded > 0))
@@ -466,6 +587,9 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       blankLoss += cells[k]!.resistanceOhm * ik * ik;
     }
     force *= current;
+    // Over a core the blank's own matrix varies with s too: d/dt(Lb·ib) = Lb·i̇b + v·Lb′·ib, and the
+    // force gains ½·ibᵀ·Lb′·ib (the eddy currents drawn toward their image in the core).
+    if (coreTables) force += blankImageTerms(y, ib, v, nb, dlbNow, rb);
     const rc = y[iq]! / bank.capacitanceF - r1 * current - v * motional;
     // Block elimination: i̇b = Lb⁻¹(rb − m·i̇1); i̇1 = (rc − mᵀLb⁻¹rb)/(L1 − mᵀLb⁻¹m).
     let mx = 0;
@@ -474,7 +598,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
       let sx = 0;
       let su = 0;
       for (let c = 0; c < nb; c++) {
-        const w = lbInv[r * nb + c]!;
+        const w = lbInvNow[r * nb + c]!;
         sx += w * rb[c]!;
         su += w * mk[c]!;
       }
@@ -514,8 +638,8 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   let peakCurrent = 0;
   let peakCurrentTime = 0;
   let peakForce = 0;
+  let peakFluxDensity = 0;
   const samples: LaunchSeriesPoint[] = [];
-  const exitDistance = 3 * coil.outerRadiusM;
   const maxTime = Math.max(200 * characteristicTime, 1e-3);
   let result;
   try {
@@ -534,6 +658,11 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
           peakCurrentTime = t;
         }
         peakForce = Math.max(peakForce, lastForce);
+        if (coreTables)
+          peakFluxDensity = Math.max(
+            peakFluxDensity,
+            coreTables.peakFluxDensity(y[is]!, y[i1]!, y.subarray(ib, ib + nb)),
+          );
         samples.push({
           timeS: t,
           coilCurrentA: y[i1]!,
@@ -561,7 +690,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   let magnetic = 0.5 * l1 * y[i1]! ** 2;
   for (let k = 0; k < nb; k++) {
     magnetic += mk[k]! * y[i1]! * currents[k]!;
-    for (let j = 0; j < nb; j++) magnetic += 0.5 * lb[k * nb + j]! * currents[k]! * currents[j]!;
+    for (let j = 0; j < nb; j++) magnetic += 0.5 * lbNow[k * nb + j]! * currents[k]! * currents[j]!;
   }
   const speed = Math.max(0, y[iv]!);
   const kinetic = 0.5 * mass * y[iv]! ** 2;
@@ -587,6 +716,10 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     heightM,
     speedMPerS: speed,
     kineticJ: kinetic,
+    core: core && {
+      peakFluxDensityT: peakFluxDensity,
+      saturationFluxDensityT: core.spec.saturationFluxDensityT,
+    },
   });
   return {
     peakCurrentA: peakCurrent,
@@ -618,7 +751,76 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     },
     series: thin(samples, input.seriesPoints ?? 300),
     warnings,
+    ...(core ? { core: { peakFluxDensityT: peakFluxDensity } } : {}),
   };
+}
+
+/**
+ * The core's tables for this launch (magnetic-core.ts), tabulated a fifth beyond the distance at
+ * which the blank is taken to have left, and the small steps that fold them into the circuit.
+ */
+function coreTablesFor(
+  factored: ReturnType<typeof factorCore>,
+  coilCells: Filament[],
+  cells: BlankFilament[],
+  exitDistance: number,
+) {
+  const nb = cells.length;
+  if (cells.some((c) => !(c.zM > 0)))
+    throw new OutsideModelError(
+      '/body/gap',
+      'over a core the blank must sit above the core face (a gap of zero or more)',
+    );
+  const tables: CoreCoupling = coreCoupling(
+    factored,
+    coilCells.map(asRing),
+    cells.map(asRing),
+    1.2 * exitDistance,
+  );
+  const dm = new Float64Array(nb);
+  const ddm = new Float64Array(nb);
+  const dlb = new Float64Array(nb * nb);
+  const blank = new Float64Array(nb * nb);
+  const blankGradient = new Float64Array(nb * nb);
+  return {
+    /**
+     * At s: adds the core's share to the coil–filament mutuals `mk` and their gradients `dmk`,
+     * and returns the blank's own matrix (air-core `lbAir` plus the core's share) and its
+     * s-derivative. The arrays returned are overwritten by the next call.
+     */
+    at(s: number, lbAir: Float64Array, mk: Float64Array, dmk: Float64Array) {
+      tables.at(s, dm, ddm, dlb, blankGradient);
+      for (let k = 0; k < nb; k++) {
+        mk[k] = mk[k]! + dm[k]!;
+        dmk[k] = dmk[k]! + ddm[k]!;
+      }
+      for (let i = 0; i < nb * nb; i++) blank[i] = lbAir[i]! + dlb[i]!;
+      return { lb: blank, dlb: blankGradient };
+    },
+    peakFluxDensity: tables.peakFluxDensity,
+  };
+}
+
+/**
+ * The blank's own motional term and force over a core: subtracts v·Lb′·ib from the filaments'
+ * right-hand sides `rb` and returns ½·ibᵀ·Lb′·ib, N.
+ */
+function blankImageTerms(
+  y: Float64Array,
+  ib: number,
+  v: number,
+  nb: number,
+  dlb: Float64Array,
+  rb: Float64Array,
+): number {
+  let force = 0;
+  for (let k = 0; k < nb; k++) {
+    let row = 0;
+    for (let j = 0; j < nb; j++) row += dlb[k * nb + j]! * y[ib + j]!;
+    rb[k] = rb[k]! - v * row;
+    force += 0.5 * y[ib + k]! * row;
+  }
+  return force;
 }
 
 const figure = (x: number) => Number(x.toPrecision(3));
@@ -650,7 +852,8 @@ export function ballistics(
 /**
  * The warnings of one launch: a magnetic layer the model treats as non-magnetic; the winding's
  * adiabatic temperature rise above its insulation class (IEC 60085, warnings.ts); a blank that
- * rises above head height or leaves with more than 1 J.
+ * rises above head height or leaves with more than 1 J; a bank or switch over its ratings; a
+ * core driven past its saturation flux density (the model takes it as linear).
  */
 function launchWarnings(l: {
   bank: CapacitorBank;
@@ -663,6 +866,7 @@ function launchWarnings(l: {
   heightM: number;
   speedMPerS: number;
   kineticJ: number;
+  core?: { peakFluxDensityT: number; saturationFluxDensityT: number };
 }): EstimateWarning[] {
   const warnings: EstimateWarning[] = [];
   if (l.blank.layers.some((layer) => layer.relativePermeability > MAGNETIC_FROM_MU_R))
@@ -702,6 +906,12 @@ function launchWarnings(l: {
       message: `The switch is over its ratings: ${over.join(' and ')}. A thyristor's surge rating is for one 10 ms half-sine; beyond it the junction can fail short.`,
     });
   }
+  const core = l.core;
+  if (core && core.peakFluxDensityT > core.saturationFluxDensityT)
+    warnings.push({
+      code: 'core-saturation',
+      message: `The core's flux density peaks at about ${figure(core.peakFluxDensityT)} T, above its saturation flux density of ${figure(core.saturationFluxDensityT)} T: past saturation the core adds little more field, and this estimate, which takes the core as linear, overstates the launch.`,
+    });
   return warnings;
 }
 

@@ -7,7 +7,8 @@ export type WarningCode =
   | 'coil-heating'
   | 'projectile-hazard'
   | 'bank-over-rated-voltage'
-  | 'switch-over-rating';
+  | 'switch-over-rating'
+  | 'core-saturation';
 
 export interface EstimateWarning {
   code: WarningCode;

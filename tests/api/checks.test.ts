@@ -75,7 +75,7 @@ describe('GET /api/v1/checks', () => {
   it('lists every engine check with ours, the reference, the difference, the tolerance and the source', () => {
     const rows = first.body.engine as Row[];
     // TEAM 15-1 (4), skin depths (4), Maxwell (2 + 8 × 2), apparent conductivity (5), launch (1).
-    expect(rows).toHaveLength(4 + 4 + 18 + 5 + 1);
+    expect(rows).toHaveLength(4 + 4 + 18 + 5 + 1 + 3);
     expect(new Set(rows.map((r) => r.id)).size).toBe(rows.length);
     for (const r of rows) {
       expect(Object.keys(r).sort(), r.id).toEqual(ROW_KEYS);
@@ -86,7 +86,7 @@ describe('GET /api/v1/checks', () => {
         15,
       );
       expect(r.source.length, r.id).toBeGreaterThan(10);
-      expect(r.unit).toMatch(/^(H|ohm|m|S\/m|H\/m|J)$/);
+      expect(r.unit).toMatch(/^(H|ohm|m|S\/m|H\/m|J|1)$/);
     }
   });
 
