@@ -71,7 +71,11 @@ describe('GET /api/v1/alloys?q=: ranking', () => {
     ['C26000', 'cartridge-brass-c26000', 'UNS C26000'],
     ['UNS+C26000', 'cartridge-brass-c26000', 'UNS C26000 with its prefix word'],
     ['cartridge-brass-c26000', 'cartridge-brass-c26000', 'its slug'],
-    ['Ni', 'nickel-electrolytic', 'symbol of nickel; electrolytic nickel is 99.9 % Ni, the richest'],
+    [
+      'Ni',
+      'nickel-electrolytic',
+      'symbol of nickel; electrolytic nickel is 99.9 % Ni, the richest',
+    ],
     ['cupronickel', 'cupronickel-90-10-c70600', 'its name; the first of the three in table order'],
     ['nickel+silver', 'nickel-silver-c75200', 'its name'],
     ['German+silver', 'nickel-silver-c75200', 'alias: common practice, no source'],
