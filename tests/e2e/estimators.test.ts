@@ -113,8 +113,8 @@ describe('the estimators, as a person uses them in Chromium', () => {
     });
     await table.waitFor({ timeout: 60_000 });
     const rows = table.locator('tbody tr');
-    // TEAM 15-1 (4), skin depths (4), Maxwell (18), apparent conductivity (5), launch ledger (1).
-    await expect(rows.count()).resolves.toBe(32);
+    // TEAM 15-1 (4), skin depths (4), Maxwell (18), apparent conductivity (5), launch ledger (1), core (3).
+    await expect(rows.count()).resolves.toBe(35);
     const results = await rows.evaluateAll((trs) =>
       trs.map((tr) => {
         const cells = [...tr.querySelectorAll('td')];
