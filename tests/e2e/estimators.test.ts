@@ -122,7 +122,7 @@ describe('the estimators, as a person uses them in Chromium', () => {
       }),
     );
     expect(results.filter((r) => !r.endsWith('✓ Pass'))).toEqual([]);
-    await expect(page.getByText('32 of 32 checks pass.').isVisible()).resolves.toBe(true);
+    await expect(page.getByText('35 of 35 checks pass.').isVisible()).resolves.toBe(true);
     await expect(
       page.getByRole('heading', { name: "Where the table's values come from" }).isVisible(),
     ).resolves.toBe(true);

@@ -101,10 +101,10 @@ export function LayerLabRoute() {
       ) : null}
 
       <div className="flex flex-wrap items-center gap-3">
-        <label className="flex items-center gap-2 text-sm">
-          <span className="font-medium">Add a demo coin</span>
+        <label className="flex min-w-0 max-w-full items-center gap-2 text-sm">
+          <span className="shrink-0 font-medium">Add a demo coin</span>
           <select
-            className="rounded border border-patina-300 bg-white px-2 py-1"
+            className="min-w-0 max-w-full flex-1 rounded border border-patina-300 bg-white px-2 py-1"
             value=""
             disabled={list.length >= MAX_BLANKS}
             onChange={(e) => {
