@@ -10,6 +10,7 @@ import {
   type ConductorLayer,
 } from '../../shared/physics/dodd-deeds';
 import { simulateLaunch, type LaunchInput } from '../../shared/physics/launch';
+import { evaluateSortPlan, type PlanInput } from '../../shared/physics/sort-plan';
 import { MAGNETIC_FROM_MU_R, type EstimateWarning } from '../../shared/physics/warnings';
 import { percentIacs } from '../../shared/units/conductivity';
 import { kernelFor } from './kernel-cache';
@@ -28,8 +29,14 @@ export interface LaunchJob {
   input: Omit<LaunchInput, 'deadline'>;
 }
 
+/** A sort plan, resolved against the table: SI numbers and materials with their ranges. */
+export interface SortPlanJob {
+  kind: 'sort-plan';
+  input: PlanInput;
+}
+
 /** A calculation as it crosses into a worker thread: SI numbers only, already validated. */
-export type EstimateJob = (SensorJob | LaunchJob) & { computeLimitMs: number };
+export type EstimateJob = (SensorJob | LaunchJob | SortPlanJob) & { computeLimitMs: number };
 
 /**
  * What comes back. Expected failures travel as values, not thrown errors, because an Error's
@@ -121,6 +128,8 @@ export function runEstimateJob(job: EstimateJob): EstimateOutcome {
   const deadline = performance.now() + job.computeLimitMs;
   try {
     if (job.kind === 'launch') return { ok: true, value: launch(job, deadline) };
+    if (job.kind === 'sort-plan')
+      return { ok: true, value: evaluateSortPlan(job.input, { deadline, kernelFor }) };
     if (job.kind === 'impedance') return { ok: true, value: impedancePoints(job, deadline) };
     return { ok: true, value: apparentConductivity(job, deadline) };
   } catch (error) {
