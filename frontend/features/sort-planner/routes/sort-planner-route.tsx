@@ -5,12 +5,7 @@ import { NominalCaution } from '../../../components/nominal-caution';
 import { ProblemMessage } from '../../../components/problem-message';
 import { UnitSwitcher } from '../../../components/unit-switcher';
 import { fieldProblems, plainMessage } from '../../../lib/field-errors';
-import {
-  formatConductivity,
-  formatConductivityRange,
-  formatFrequency,
-  formatNumber,
-} from '../../../lib/format';
+import { formatConductivityRange, formatFrequency, formatNumber } from '../../../lib/format';
 import { useMaterials } from '../../../lib/materials';
 import { useMe } from '../../../lib/session';
 import { useSavedStacks } from '../../../lib/stack-drafts';
@@ -244,24 +239,13 @@ function PlanResults({ result }: { result: PlanResult }) {
       {at ? (
         <DataTable
           caption={`Windows at the recommended ${formatFrequency(at.frequencyHz)}`}
-          headers={[
-            'Product',
-            `Window at ${formatFrequency(at.frequencyHz)}`,
-            'Width',
-            'Overlaps with',
-          ]}
+          headers={['Product', `Window at ${formatFrequency(at.frequencyHz)}`, 'Overlaps with']}
         >
           {at.windows.map((w) => (
             <tr key={w.product} className="border-t border-patina-100">
               <td className="px-3 py-2 font-medium">{w.product}</td>
               <td className="px-3 py-2 tabular-nums">
                 {formatConductivityRange(w.lowSPerM, w.highSPerM, unit)}
-              </td>
-              <td className="px-3 py-2 tabular-nums">
-                {formatConductivity(
-                  w.highSPerM - w.lowSPerM,
-                  unit === 'S/m' || unit === 'MS/m' ? unit : '%IACS',
-                )}
               </td>
               <td className="px-3 py-2">
                 {at.overlaps
