@@ -159,17 +159,14 @@ function nearestOnCurve(
 /**
  * The conductivity of the homogeneous plate whose normalised ΔZ lies nearest (tRe, tIm) at
  * angular frequency ω: a scan of the curve's grid within the σ range an instrument reports
- * ({@link SIGMA_RANGE}), or only `hint ± span` grid points of it when the caller knows where the
- * answer lies, then a golden-section search between the neighbours of the best grid point.
- * Returns σ (S/m), the relative distance of the fit and the fractional grid index (a hint for
- * the next, nearby fit).
+ * ({@link SIGMA_RANGE}), then a golden-section search between the neighbours of the best grid
+ * point. Returns σ (S/m), the relative distance of the fit and the fractional grid index.
  */
 export function fitOnReferenceCurve(
   curve: ReferenceCurve,
   omega: number,
   tRe: number,
   tIm: number,
-  hint?: { index: number; span: number },
   /** Golden-section stop, in grid steps (a grid step is 1/60 of a decade of σ). */
   tolerance = 1e-7,
 ): { apparentSPerM: number; fitResidual: number; index: number } {
@@ -180,15 +177,9 @@ export function fitOnReferenceCurve(
   const toIndex = (p: number) => ((Math.log(p) - first) / range) * (n - 1);
   let lo = Math.max(0, toIndex(omega * SIGMA_RANGE[0]));
   let hi = Math.min(n - 1, toIndex(omega * SIGMA_RANGE[1]));
-  let scanLo = lo;
-  let scanHi = hi;
-  if (hint) {
-    scanLo = Math.max(lo, hint.index - hint.span);
-    scanHi = Math.min(hi, hint.index + hint.span);
-  }
-  let best = Math.round(scanLo);
+  let best = Math.round(lo);
   let bestDist = Infinity;
-  for (let i = Math.ceil(scanLo); i <= Math.floor(scanHi); i++) {
+  for (let i = Math.ceil(lo); i <= Math.floor(hi); i++) {
     const dd = (curve.re[i]! - tRe) ** 2 + (curve.im[i]! - tIm) ** 2;
     if (dd < bestDist) {
       bestDist = dd;

@@ -127,15 +127,15 @@ export interface PlanOptions {
 const IACS_100 = 58e6;
 
 /**
- * Quadrature of the plan's kernel: Gauss–Legendre of order 8 on panels half as dense as Layer
- * Lab's, then cut where the rest of Σ|w| falls below 1e-9 of the whole (|R| ≤ 1, so the cut
- * bounds the error). Against Layer Lab's kernel it agrees to about 1e-8 in normalised ΔZ on
- * coils of 4–12 mm radius at 0.2–1 mm lift-off, with 100–250 nodes instead of 500–1100:
- * readings need four or five digits, tolerances move them by percent.
+ * Quadrature of the plan's kernel: Gauss–Legendre of order 6 on panels half as dense as Layer
+ * Lab's, then cut where the rest of Σ|w| falls below 1e-8 of the whole (|R| ≤ 1, so the cut
+ * bounds the error). Readings agree with Layer Lab's to about 1e-5 (tests/unit/physics/
+ * sort-plan.test.ts allows 2e-5) with about 60–150 nodes instead of 500–1100: table ranges and
+ * tolerances move readings by percent.
  */
-export const PLAN_KERNEL = { refine: 0.25, order: 8 } as const;
+export const PLAN_KERNEL = { refine: 0.25, order: 6 } as const;
 export type PlanKernelOptions = typeof PLAN_KERNEL;
-const TAIL_TOLERANCE = 1e-9;
+const TAIL_TOLERANCE = 1e-8;
 
 /**
  * The coil's part of the conductor term once for all lift-offs: lift-off ℓ enters the
@@ -193,8 +193,6 @@ interface ProductModel {
   materials: number[];
   core: number;
   curve: ReferenceCurve;
-  /** The grid index of the nominal reading at each frequency: where a sample's fit starts. */
-  hints: number[];
 }
 
 /** σ of material m at temperature T for a given room-temperature σ and coefficient. */
@@ -234,11 +232,8 @@ interface Reading {
   sigma: number;
   resistance: number;
   reactance: number;
-  index: number;
 }
 
-/** Grid points either side of the nominal reading's that a sample's fit scans first. */
-const HINT_SPAN = 40;
 /** The fit's stop in grid steps: 1e-5 of 1/60 decade, a few parts in 1e7 of the reading. */
 const FIT_TOLERANCE = 1e-5;
 
@@ -249,30 +244,21 @@ function readAt(
   layers: ConductorLayer[],
   frequencyHz: number,
   frequencyIndex: number,
-  hint: number | undefined,
 ): Reading {
   const omega = 2 * Math.PI * frequencyHz;
   const [iRe, iIm] = conductorIntegral(kernel.alphas, weights, kernel.count, layers, omega);
   const resistance = (-kernel.scale * iIm) / kernel.inductanceInAirH;
   const deltaX = (kernel.scale * iRe) / kernel.inductanceInAirH;
-  let fit = fitOnReferenceCurve(
-    curve,
-    omega,
-    resistance,
-    deltaX,
-    hint === undefined ? undefined : { index: hint, span: HINT_SPAN },
-    FIT_TOLERANCE,
-  );
-  // A fit at the edge of the hinted span (and not at the edge of the σ range) may have stopped
-  // short of the true nearest point: search the whole curve.
-  if (hint !== undefined && Math.abs(fit.index - hint) > HINT_SPAN - 1.5)
-    fit = fitOnReferenceCurve(curve, omega, resistance, deltaX, undefined, FIT_TOLERANCE);
+  // The whole curve is scanned for every reading: a plate of finite thickness gives a curve that
+  // bends back near itself, and a search started from the nominal reading's neighbourhood can
+  // settle on the wrong branch (it moved some windows by two thirds when tried).
+  const fit = fitOnReferenceCurve(curve, omega, resistance, deltaX, FIT_TOLERANCE);
   if (!Number.isFinite(fit.apparentSPerM) || !Number.isFinite(fit.fitResidual))
     throw new OutsideModelError(
       `/body/frequencies/${frequencyIndex}`,
       `at ${frequencyHz} Hz a product changes the coil's impedance by too little to read: raise the frequency`,
     );
-  return { sigma: fit.apparentSPerM, resistance, reactance: 1 + deltaX, index: fit.index };
+  return { sigma: fit.apparentSPerM, resistance, reactance: 1 + deltaX };
 }
 
 /** Running extremes of the readings of one product at one frequency. */
@@ -417,7 +403,7 @@ export function evaluateSortPlan(input: PlanInput, options: PlanOptions = {}): P
         code: 'magnetic-layer',
         message: `${product.name} has a magnetic layer (µr up to ${Number(muR.toPrecision(3))}): its reading against non-magnetic calibration blocks is the nearest non-magnetic plate to an impedance no such plate gives, so its window is only a guide. A magnetic piece moves the impedance in a direction of its own, which an instrument can use to tell it apart.`,
       });
-    return { product, materials, core, curve, hints: [] };
+    return { product, materials, core, curve };
   });
 
   const extents = models.map(() => freqs.map(() => new Extent()));
@@ -433,15 +419,14 @@ export function evaluateSortPlan(input: PlanInput, options: PlanOptions = {}): P
       const w = weightsAt(kernel, state.liftOffM);
       const layers = layersOf(model, input, state);
       return freqs.map((f, i) => {
-        const r = readAt(kernel, w, model.curve, layers, f, i, model.hints[i]);
+        const r = readAt(kernel, w, model.curve, layers, f, i);
         if (record) extents[p]![i]!.add(r);
         return r;
       });
     };
-    // The nominal piece: the hints for every other fit, and the middle of each range.
-    const nominalState = stateAt(model, input, new Map(), params);
-    const nominal = evaluate(nominalState, false);
-    model.hints = nominal.map((r) => r.index);
+    // The nominal piece: the middle of each range, for the monotonicity check.
+    const nominal =
+      method.kind === 'interval' ? evaluate(stateAt(model, input, new Map(), params), false) : [];
 
     if (method.kind === 'interval') {
       for (let corner = 0; corner < 1 << params.length; corner++) {

@@ -9,6 +9,8 @@ import {
   type PlanWindow,
 } from '../../../shared/physics/sort-plan';
 import { skinDepth } from '../../../shared/physics/skin-depth';
+import { apparentConductivitySweep } from '../../../shared/physics/apparent-conductivity';
+import { buildDoddDeedsKernel } from '../../../shared/physics/dodd-deeds';
 
 const MS = 1e6;
 const um = 1e-6;
@@ -151,6 +153,51 @@ describe('known physics', () => {
     expect(
       result.frequencies[0]!.windows[0]!.lowSPerM / ((58 * MS) / (1 + 0.00393 * 20)),
     ).toBeCloseTo(1, 5);
+  });
+});
+
+describe("the plan's kernel against Layer Lab's", () => {
+  it('reads a plated coin within 2e-5 of Layer Lab at every frequency', () => {
+    // Layer Lab's kernel agrees with SciPy to ~1e-11 (tests/fixtures/physics); the plan's
+    // coarser quadrature is allowed 2e-5 of the reading (the smallest round bound that passes:
+    // table ranges are percent wide).
+    const layers = [
+      { conductivitySPerM: 58 * MS, relativePermeability: 1, thicknessM: 8 * um },
+      { conductivitySPerM: 16.4 * MS, relativePermeability: 1, thicknessM: 1.34 * mm },
+      { conductivitySPerM: 58 * MS, relativePermeability: 1, thicknessM: 8 * um },
+    ];
+    const frequenciesHz = [100, 1e3, 1e4, 1e5, 1e6, 1e7];
+    for (const liftOff of [0.1 * mm, 0.5 * mm, 2 * mm]) {
+      const lab = apparentConductivitySweep(
+        buildDoddDeedsKernel(COIL, liftOff),
+        layers,
+        frequenciesHz,
+      );
+      const result = evaluateSortPlan(
+        plan({
+          frequenciesHz,
+          liftOffM: { min: liftOff, max: liftOff },
+          materials: [material('copper', 58 * MS, 58 * MS), material('zinc', 16.4 * MS, 16.4 * MS)],
+          products: [
+            {
+              name: 'plated',
+              layers: [
+                { material: 0, thicknessM: 8 * um },
+                { material: 1, thicknessM: 1.34 * mm },
+                { material: 0, thicknessM: 8 * um },
+              ],
+            },
+          ],
+        }),
+      );
+      result.frequencies.forEach((f, i) => {
+        const expected = lab[i]!.apparentConductivitySPerM;
+        expect(
+          Math.abs(f.windows[0]!.lowSPerM / expected - 1),
+          `${f.frequencyHz} Hz, ${liftOff} m`,
+        ).toBeLessThan(2e-5);
+      });
+    }
   });
 });
 
