@@ -130,27 +130,28 @@ function nearestOnCurve(
   hi: number,
   tolerance = 1e-7,
 ): number {
-  const dist = (x: number) => distanceAt(c, x, tRe, tIm);
+  // distanceAt called directly, not through a closure made per call: this runs for every reading
+  // of a sort plan.
   const g = (Math.sqrt(5) - 1) / 2;
   let a = lo;
   let b = hi;
   let x1 = b - g * (b - a);
   let x2 = a + g * (b - a);
-  let f1 = dist(x1);
-  let f2 = dist(x2);
+  let f1 = distanceAt(c, x1, tRe, tIm);
+  let f2 = distanceAt(c, x2, tRe, tIm);
   for (let k = 0; k < 60 && b - a > tolerance; k++) {
     if (f1 < f2) {
       b = x2;
       x2 = x1;
       f2 = f1;
       x1 = b - g * (b - a);
-      f1 = dist(x1);
+      f1 = distanceAt(c, x1, tRe, tIm);
     } else {
       a = x1;
       x1 = x2;
       f1 = f2;
       x2 = a + g * (b - a);
-      f2 = dist(x2);
+      f2 = distanceAt(c, x2, tRe, tIm);
     }
   }
   return (a + b) / 2;
