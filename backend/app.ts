@@ -53,7 +53,9 @@ import { estimatesRouter } from './routes/estimates';
 import { healthRouter } from './routes/health';
 import { matchRouter } from './routes/match';
 import { readingsRouter } from './routes/readings';
+import { sortPlansRouter } from './routes/sort-plans';
 import { stacksRouter } from './routes/stacks';
+import { createSortPlanRepository } from './db/sort-plan-repository';
 import { CatalogueStore } from './services/catalogue-store';
 import { createChecksService } from './services/checks';
 
@@ -185,10 +187,20 @@ export function createApp(options: AppOptions): Express {
   );
   v1.use(matchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
-  v1.use(stacksRouter(createStackRepository(knex), catalogue));
+  const stacks = createStackRepository(knex);
   const estimatePool = options.estimatePool ?? createEstimatePool();
+  v1.use(stacksRouter(stacks, catalogue));
   v1.use(estimatesRouter(catalogue, estimatePool));
   v1.use(checksRouter(createChecksService(estimatePool, catalogue)));
+  v1.use(
+    sortPlansRouter({
+      catalogue,
+      releases,
+      stacks,
+      plans: createSortPlanRepository(knex),
+      pool: estimatePool,
+    }),
+  );
   v1.use(authRouter(accounts, credentialThrottles(credentials), production));
   v1.use(meRouter(repos));
   v1.use(keysRouter(keys, repos));

@@ -8,6 +8,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { projectRoot } from '../backend/paths';
 import { benchPhysics } from './physics';
+import { benchSortPlan } from './sort-plan';
 import { initialJavaScript, INITIAL_JS_BUDGET_KB } from './initial-js';
 import { heaviestLaunch } from '../tests/helpers/launches';
 
@@ -151,3 +152,6 @@ console.log(
 
 // BENCH_PHYSICS=0 skips the engine's comparison with SciPy (about a minute).
 if (process.env.BENCH_PHYSICS !== '0') benchPhysics();
+
+// BENCH_SORT_PLAN=0 skips the Sort Planner's Monte Carlo plan against its naive cost.
+if (process.env.BENCH_SORT_PLAN !== '0') await benchSortPlan();

@@ -5,6 +5,7 @@ import * as createAccounts from '../../migrations/20261201130000_create_accounts
 import * as createCuration from '../../migrations/20261201140000_create_curation';
 import * as addAlloyAliases from '../../migrations/20261201230000_add_alloy_aliases';
 import * as addValueQuotes from '../../migrations/20261202090000_add_value_quotes';
+import * as createSortPlans from '../../migrations/20261202100000_create_sort_plans';
 
 /**
  * Migrations listed statically: Knex's directory loading cannot import .ts files under vitest,
@@ -18,6 +19,7 @@ export const migrations: Record<string, Knex.Migration> = {
   '20261201140000_create_curation': createCuration,
   '20261201230000_add_alloy_aliases': addAlloyAliases,
   '20261202090000_add_value_quotes': addValueQuotes,
+  '20261202100000_create_sort_plans': createSortPlans,
 };
 
 export const migrationSource: Knex.MigrationSource<string> = {

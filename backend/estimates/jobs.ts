@@ -13,6 +13,7 @@ import { simulateLaunch, type LaunchInput } from '../../shared/physics/launch';
 import { apparentConductivityWarnings } from '../../shared/physics/sensor-warnings';
 import type { EstimateWarning } from '../../shared/physics/warnings';
 import { runEngineChecks } from '../../shared/checks/engine-checks';
+import { evaluateSortPlan, type PlanInput } from '../../shared/physics/sort-plan';
 import { percentIacs } from '../../shared/units/conductivity';
 import { kernelFor } from './kernel-cache';
 
@@ -35,8 +36,16 @@ export interface ChecksJob {
   kind: 'checks';
 }
 
+/** A sort plan, resolved against the table: SI numbers and materials with their ranges. */
+export interface SortPlanJob {
+  kind: 'sort-plan';
+  input: PlanInput;
+}
+
 /** A calculation as it crosses into a worker thread: SI numbers only, already validated. */
-export type EstimateJob = (SensorJob | LaunchJob | ChecksJob) & { computeLimitMs: number };
+export type EstimateJob = (SensorJob | LaunchJob | ChecksJob | SortPlanJob) & {
+  computeLimitMs: number;
+};
 
 /**
  * What comes back. Expected failures travel as values, not thrown errors, because an Error's
@@ -122,6 +131,8 @@ export function runEstimateJob(job: EstimateJob): EstimateOutcome {
   try {
     if (job.kind === 'checks') return { ok: true, value: runEngineChecks() };
     if (job.kind === 'launch') return { ok: true, value: launch(job, deadline) };
+    if (job.kind === 'sort-plan')
+      return { ok: true, value: evaluateSortPlan(job.input, { deadline, kernelFor }) };
     if (job.kind === 'impedance') return { ok: true, value: impedancePoints(job, deadline) };
     return { ok: true, value: apparentConductivity(job, deadline) };
   } catch (error) {

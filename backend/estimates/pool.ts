@@ -3,7 +3,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
 import { ProblemError } from '../http/problem';
-import type { ChecksJob, EstimateOutcome, LaunchJob, SensorJob } from './jobs';
+import type { ChecksJob, EstimateOutcome, LaunchJob, SensorJob, SortPlanJob } from './jobs';
 
 export interface EstimatePoolOptions {
   /** Worker threads; by default one core is left to the event loop. */
@@ -40,7 +40,7 @@ function workerFile(): { filename: string; execArgv: string[] } {
 export interface EstimatePool {
   readonly computeLimitMs: number;
   /** Runs a job on a worker thread; resolves with the response body or throws a ProblemError. */
-  run(job: SensorJob | LaunchJob | ChecksJob): Promise<unknown>;
+  run(job: SensorJob | LaunchJob | ChecksJob | SortPlanJob): Promise<unknown>;
   /** Threads busy and jobs waiting, for the health check and the bench. */
   load(): { running: number; queued: number; threads: number };
   close(): Promise<void>;

@@ -90,6 +90,15 @@ export function createReleaseService(knex: Knex, alloys: AlloyRepository) {
         alloys: JSON.parse(r.snapshot_json) as ReturnType<typeof snapshotOf>,
       };
     },
+    /** The newest release's version and checksum, or null when none has been published. */
+    async latest(): Promise<{ version: string; checksum: string } | null> {
+      const r = await knex('releases').select('version', 'checksum').orderBy('id', 'desc').first();
+      return r ? { version: r.version as string, checksum: r.checksum as string } : null;
+    },
+    /** What a release made now would carry as its checksum: for plans made before any release. */
+    async liveChecksum(): Promise<string> {
+      return sha256(canonicalJson(snapshotOf(await alloys.listPublished())));
+    },
     /** The catalogue as a release froze it, for `?release=` reads. */
     async catalogue(version: string): Promise<Catalogue> {
       let c = catalogues.get(version);

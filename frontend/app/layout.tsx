@@ -143,6 +143,9 @@ export function Layout() {
               <NavLink to="/pulse-bench" className={linkClass}>
                 Pulse Bench
               </NavLink>
+              <NavLink to="/sort-planner" className={linkClass}>
+                Sort Planner
+              </NavLink>
               <a
                 href="/api/docs/"
                 className="rounded px-3 py-1.5 text-sm font-medium text-patina-50 hover:bg-patina-700"

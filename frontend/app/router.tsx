@@ -107,6 +107,13 @@ export const router = createBrowserRouter([
             }),
           },
           {
+            path: 'sort-planner',
+            lazy: async () => ({
+              Component: (await import('../features/sort-planner/routes/sort-planner-route'))
+                .SortPlannerRoute,
+            }),
+          },
+          {
             path: 'sign-in',
             lazy: async () => ({
               Component: (await import('../features/access/routes/sign-in-route')).SignInRoute,

@@ -703,6 +703,167 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/sort-plans/evaluate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Windows of each product's reading per frequency, overlaps and the frequency that separates them
+         * @description For each product, the window of apparent conductivity an instrument calibrated on solid,
+         *     non-magnetic blocks reports at each frequency (Layer Lab's reading: the homogeneous
+         *     non-magnetic plate of the product's nominal total thickness, or a half-space for a solid
+         *     alloy, whose normalised ΔZ lies nearest the piece's; Dodd & Deeds 1968), over the ranges
+         *     given: lift-off (the instrument is calibrated at the middle of the range; a piece at
+         *     another lift-off moves the reading), temperature (through each layer's temperature
+         *     coefficient of resistivity; one estimated by Matthiessen's rule where the table has none),
+         *     each layer's conductivity from the table's min–max at the release, and the plating
+         *     thickness (every layer but the thickest, ± the percentage, all together).
+         *
+         *     `interval` evaluates the corners of that box and warns `non-monotone` where the middle of a
+         *     range reads outside its ends (the corners then understate the window); `monteCarlo` draws
+         *     `samples` pieces uniformly within every range with xoshiro128** from `seed` (the same seed
+         *     gives the same answer) and takes the smallest and largest reading.
+         *
+         *     `separability` at a frequency: the windows ordered by their centres, the smallest gap
+         *     between neighbours (upper one's low end minus lower one's high end) in units of their mean
+         *     width. Above 0 every product stands apart (1: the closest two are one window-width apart),
+         *     0 means two touch, below 0 two overlap. Widths below a millionth of the reading count as
+         *     that millionth. `recommendedFrequencyHz` has the largest separability (the lowest of
+         *     equals). `recommendedPair` is the two frequencies whose joint windows, a box per product in
+         *     the plane of the two readings, keep the most pairs of products apart (two boxes are apart
+         *     when their windows are disjoint at either frequency); ties go to the larger smallest gap.
+         *     `overlaps` lists the pairs whose windows share readings, `fraction` the shared length over
+         *     the narrower window's width.
+         *
+         *     `impedance` is normalised: ΔR/X0 and X/X0, X0 = ωL0 of the coil in air. The plate model
+         *     takes a blank as wider than the coil's field, so `diameterPercent` does not move a window;
+         *     `blank-edge` warns when a blank's smallest diameter is under three coil outer radii. Without `release`, the latest release; with none published, the live table
+         *     (`version` "unreleased", warning `unreleased-table`).
+         *
+         *     Sizes: visitors and readers may evaluate up to 6 products, 16 frequencies and 200 Monte
+         *     Carlo samples here (the estimate rate limit applies); integrators, curators and admins up
+         *     to 12 products, 64 frequencies and 5,000 samples, and at most 400,000 readings in all
+         *     (products × frequencies × samples, or × box corners).
+         */
+        post: operations["evaluateSortPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/sort-plans": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** Your saved sort plans, newest first */
+        get: operations["listSortPlans"];
+        put?: never;
+        /** Evaluate a plan and save it with its release and the result's SHA-256 */
+        post: operations["saveSortPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/sort-plans/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** One of your saved plans with its inputs and result */
+        get: operations["getSortPlan"];
+        put?: never;
+        post?: never;
+        /** Delete one of your saved plans */
+        delete: operations["deleteSortPlan"];
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/sort-plans/{id}/re-evaluate": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Evaluate a saved plan against another release and show what moved
+         * @description The saved inputs against `release` (the latest when absent). Nothing is saved: save the
+         *     plan again to keep the new result. `moved` lists every window whose ends changed, with
+         *     both; `recommendedFrequencyHz` gives the saved and the new recommendation.
+         */
+        post: operations["reEvaluateSortPlan"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/sort-plans/{id}/export": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A saved plan's windows as JSON, CSV or a C99 header, pinned to its release
+         * @description The same plan gives the same bytes every time. Each format carries the release version and
+         *     checksum and the result's SHA-256. `csv`: one row per frequency and product (RFC 4180,
+         *     CRLF; windows in S/m and %IACS). `c`: a C99 header with an include guard, `const` arrays of
+         *     the frequencies (Hz), product names and window bounds (%IACS, low then high), and a
+         *     `static inline` lookup that gives the one product whose window holds a reading, −1 for
+         *     none, −2 for more than one; it compiles with `gcc -std=c99 -Wall -Wextra -Werror`.
+         */
+        get: operations["exportSortPlan"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/releases/{version}/export": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * A release's conductivity table as JSON, CSV or a C99 header
+         * @description Every alloy of the release with its conductivity (nominal, min, max; S/m and %IACS at the
+         *     table's reference temperature), carrying the release version and checksum; the same
+         *     release gives the same bytes every time. `c`: a C99 header with an include guard, `const`
+         *     arrays of slugs and ranges (%IACS) and a `static inline` lookup of the next alloy whose
+         *     range holds a reading.
+         */
+        get: operations["exportRelease"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1258,8 +1419,146 @@ export interface components {
             changelog: Record<string, never>[];
             alloys: Record<string, never>[];
         };
+        SortPlanName: string;
+        /** @description A product the line sees: an alloy of the table (a piece thick against the skin depth: a half-space), a built-in stack by slug, or a blank of your own (layers as in the estimates, from the face toward the coil). */
+        SortPlanProduct: {
+            name: components["schemas"]["SortPlanName"];
+            alloy: string;
+        } | {
+            name: components["schemas"]["SortPlanName"];
+            stack: string;
+        } | {
+            name: components["schemas"]["SortPlanName"];
+            blank: {
+                diameter: components["schemas"]["LengthQuantity"];
+                layers: components["schemas"]["Layer"][];
+            };
+        };
+        SortPlanRequest: {
+            products: components["schemas"]["SortPlanProduct"][];
+            coil: components["schemas"]["Coil"];
+            /** @description A list of frequencies, or a sweep of `points` log-spaced from `from` to `to`. */
+            frequencies: components["schemas"]["FrequencyQuantity"][] | {
+                from: components["schemas"]["FrequencyQuantity"];
+                to: components["schemas"]["FrequencyQuantity"];
+                points: number;
+            };
+            liftOff: {
+                min: components["schemas"]["DistanceQuantity"];
+                max: components["schemas"]["DistanceQuantity"];
+            };
+            temperature: {
+                min: components["schemas"]["TemperatureQuantity"];
+                max: components["schemas"]["TemperatureQuantity"];
+            };
+            tolerances?: {
+                /**
+                 * @description `table`: each alloy anywhere in its min–max at the release; `nominal`: its nominal value.
+                 * @default table
+                 * @enum {string}
+                 */
+                conductivity: "table" | "nominal";
+                /** @default 0 */
+                platingThicknessPercent: number;
+                /** @default 0 */
+                diameterPercent: number;
+            };
+            method: {
+                /** @enum {string} */
+                kind: "interval";
+            } | {
+                /** @enum {string} */
+                kind: "monteCarlo";
+                /** @description Pieces drawn per product; at most 5,000 (200 for visitors and readers). */
+                samples: number;
+                seed: number;
+            };
+            release?: string;
+        };
+        WindowEnds: {
+            lowSPerM: number;
+            highSPerM: number;
+        };
+        /** @description Codes (ours, stable): `magnetic-layer` (a magnetic product's reading against non-magnetic blocks is only a guide), `non-monotone` (interval method: a reading not monotone in a range, so the corners may understate the window), `inseparable` (windows still overlap at the recommendation), `blank-edge` (a blank narrower than three coil outer radii, where the plate model ignores the edge), `no-temperature-coefficient` (a material with no coefficient, recorded or estimated, taken as independent of temperature), `no-conductivity-range` (an alloy with no min–max in the table, taken at its nominal value), `unreleased-table` (no release published; the live table was used). */
+        SortPlanWarning: {
+            /** @enum {string} */
+            code: "magnetic-layer" | "non-monotone" | "inseparable" | "blank-edge" | "no-temperature-coefficient" | "no-conductivity-range" | "unreleased-table";
+            message: string;
+        };
+        SortPlanResult: {
+            release: {
+                version: string;
+                checksum: string;
+            };
+            frequencies: {
+                frequencyHz: number;
+                windows: {
+                    product: string;
+                    lowSPerM: number;
+                    highSPerM: number;
+                    lowPercentIacs: number;
+                    highPercentIacs: number;
+                    /** @description Normalised to the coil's reactance in air (ΔR/X0, X/X0), each [low, high]. */
+                    impedance: {
+                        resistance: number[];
+                        reactance: number[];
+                    };
+                }[];
+                overlaps: {
+                    a: string;
+                    b: string;
+                    fraction: number;
+                }[];
+                /** @description Smallest gap between neighbouring windows in units of their mean width (> 0 apart, < 0 overlapping); null with one product. */
+                separability: number | null;
+            }[];
+            recommendedFrequencyHz: number | null;
+            recommendedPair: number[] | null;
+            warnings: components["schemas"]["SortPlanWarning"][];
+        };
+        SortPlanEvaluated: {
+            version: string;
+            checksum: string;
+            resultSha256: string;
+        };
+        SortPlanSummary: {
+            id: number;
+            name: string;
+            createdAt: string;
+            release: {
+                version: string;
+                checksum: string;
+            };
+            /** @description SHA-256 of the canonical JSON of `result` */
+            resultSha256: string;
+        };
+        SortPlan: {
+            id: number;
+            name: string;
+            createdAt: string;
+            release: {
+                version: string;
+                checksum: string;
+            };
+            /** @description SHA-256 of the canonical JSON of `result` */
+            resultSha256: string;
+            /** @description The evaluation request as it was saved. */
+            inputs: Record<string, never>;
+            result: components["schemas"]["SortPlanResult"];
+        };
     };
     responses: {
+        /** @description A file to download (Content-Disposition names it), the same bytes every time. */
+        Export: {
+            headers: {
+                [name: string]: unknown;
+            };
+            content: {
+                "application/json": Record<string, never>;
+                "text/csv": string;
+                "text/x-c": string;
+            };
+        };
         /** @description An RFC 9457 problem. */
         Problem: {
             headers: {
@@ -1329,6 +1628,7 @@ export interface components {
         };
     };
     parameters: {
+        ExportFormat: "json" | "csv" | "c";
         /** @description Read the table as this release froze it (e.g. 2026.12.0). */
         Release: string;
         Id: number;
@@ -2405,6 +2705,203 @@ export interface operations {
                     };
                 };
             };
+            default: components["responses"]["Problem"];
+        };
+    };
+    evaluateSortPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["SortPlanRequest"];
+            };
+        };
+        responses: {
+            /** @description The windows, overlaps, separability and recommendations. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SortPlanResult"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    listSortPlans: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Plans without their results. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        items: components["schemas"]["SortPlanSummary"][];
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    saveSortPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    name: components["schemas"]["SortPlanName"];
+                    plan: components["schemas"]["SortPlanRequest"];
+                };
+            };
+        };
+        responses: {
+            /** @description The saved plan. */
+            201: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SortPlan"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getSortPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The plan. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SortPlan"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    deleteSortPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description Deleted. */
+            204: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content?: never;
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    reEvaluateSortPlan: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody?: {
+            content: {
+                "application/json": {
+                    release?: string;
+                };
+            };
+        };
+        responses: {
+            /** @description The new result beside the saved one. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        from: components["schemas"]["SortPlanEvaluated"];
+                        to: components["schemas"]["SortPlanEvaluated"];
+                        result: components["schemas"]["SortPlanResult"];
+                        moved: {
+                            frequencyHz: number;
+                            product: string;
+                            from: components["schemas"]["WindowEnds"];
+                            to: components["schemas"]["WindowEnds"];
+                        }[];
+                        recommendedFrequencyHz: {
+                            from: number | null;
+                            to: number | null;
+                        };
+                    };
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    exportSortPlan: {
+        parameters: {
+            query: {
+                format: components["parameters"]["ExportFormat"];
+            };
+            header?: never;
+            path: {
+                id: components["parameters"]["Id"];
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: components["responses"]["Export"];
+            default: components["responses"]["Problem"];
+        };
+    };
+    exportRelease: {
+        parameters: {
+            query: {
+                format: components["parameters"]["ExportFormat"];
+            };
+            header?: never;
+            path: {
+                version: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            200: components["responses"]["Export"];
             default: components["responses"]["Problem"];
         };
     };

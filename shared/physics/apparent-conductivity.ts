@@ -26,7 +26,7 @@ export interface ConductivityLimits {
 }
 
 /** Conductivities an instrument calibrated on non-magnetic blocks can report, S/m. */
-const SIGMA_RANGE: [number, number] = [1e5, 2e8];
+export const SIGMA_RANGE: [number, number] = [1e5, 2e8];
 /** Grid density of the homogeneous reference curve, points per decade of ωσ. */
 const POINTS_PER_DECADE = 60;
 
@@ -47,14 +47,16 @@ export function conductivityLimits(layers: ConductorLayer[]): ConductivityLimits
   };
 }
 
-type Curve = { logP: Float64Array; re: Float64Array; im: Float64Array };
+/** Normalised ΔZ (re, im) of homogeneous plates against ln(ωσ), on an even grid. */
+export type ReferenceCurve = { logP: Float64Array; re: Float64Array; im: Float64Array };
+type Curve = ReferenceCurve;
 
 /**
  * The homogeneous, non-magnetic reference plate of the stack's thickness, as normalised ΔZ
  * against log(ωσ): for such a plate α₁ = √(α² + jωµ0σ) depends on ω and σ only through their
  * product, and ΔZ/X0 does not depend on ω otherwise, so one curve serves every frequency.
  */
-function referenceCurve(
+export function referenceCurve(
   kernel: DoddDeedsKernel,
   thicknessM: number | null,
   pMin: number,
@@ -86,57 +88,115 @@ function referenceCurve(
   return { logP, re, im };
 }
 
+/** Catmull–Rom interpolation of one of the curve's arrays at grid index i + t (ends clamped). */
+function catmullRom(arr: Float64Array, n: number, i: number, t: number): number {
+  const p0 = arr[Math.min(n - 1, Math.max(0, i - 1))]!;
+  const p1 = arr[Math.min(n - 1, Math.max(0, i))]!;
+  const p2 = arr[Math.min(n - 1, Math.max(0, i + 1))]!;
+  const p3 = arr[Math.min(n - 1, Math.max(0, i + 2))]!;
+  return (
+    0.5 *
+    (2 * p1 +
+      (-p0 + p2) * t +
+      (2 * p0 - 5 * p1 + 4 * p2 - p3) * t * t +
+      (-p0 + 3 * p1 - 3 * p2 + p3) * t * t * t)
+  );
+}
+
 /** Catmull–Rom interpolation of the curve at a fractional index. */
 function curveAt(c: Curve, x: number): [number, number] {
   const n = c.re.length;
   const i = Math.min(n - 2, Math.max(0, Math.floor(x)));
   const t = x - i;
-  const at = (arr: Float64Array, k: number) => arr[Math.min(n - 1, Math.max(0, k))]!;
-  const cr = (arr: Float64Array) => {
-    const p0 = at(arr, i - 1);
-    const p1 = at(arr, i);
-    const p2 = at(arr, i + 1);
-    const p3 = at(arr, i + 2);
-    return (
-      0.5 *
-      (2 * p1 +
-        (-p0 + p2) * t +
-        (2 * p0 - 5 * p1 + 4 * p2 - p3) * t * t +
-        (-p0 + 3 * p1 - 3 * p2 + p3) * t * t * t)
-    );
-  };
-  return [cr(c.re), cr(c.im)];
+  return [catmullRom(c.re, n, i, t), catmullRom(c.im, n, i, t)];
+}
+
+/** Squared distance from the curve at fractional index x to (tRe, tIm). */
+function distanceAt(c: Curve, x: number, tRe: number, tIm: number): number {
+  const n = c.re.length;
+  const i = Math.min(n - 2, Math.max(0, Math.floor(x)));
+  const t = x - i;
+  const re = catmullRom(c.re, n, i, t) - tRe;
+  const im = catmullRom(c.im, n, i, t) - tIm;
+  return re * re + im * im;
 }
 
 /** Golden-section search for the curve point nearest the target, on [lo, hi] in index units. */
-function nearestOnCurve(c: Curve, tRe: number, tIm: number, lo: number, hi: number): number {
-  const dist = (x: number) => {
-    const [re, im] = curveAt(c, x);
-    return (re - tRe) ** 2 + (im - tIm) ** 2;
-  };
+function nearestOnCurve(
+  c: Curve,
+  tRe: number,
+  tIm: number,
+  lo: number,
+  hi: number,
+  tolerance = 1e-7,
+): number {
+  // distanceAt called directly, not through a closure made per call: this runs for every reading
+  // of a sort plan.
   const g = (Math.sqrt(5) - 1) / 2;
   let a = lo;
   let b = hi;
   let x1 = b - g * (b - a);
   let x2 = a + g * (b - a);
-  let f1 = dist(x1);
-  let f2 = dist(x2);
-  for (let k = 0; k < 60 && b - a > 1e-7; k++) {
+  let f1 = distanceAt(c, x1, tRe, tIm);
+  let f2 = distanceAt(c, x2, tRe, tIm);
+  for (let k = 0; k < 60 && b - a > tolerance; k++) {
     if (f1 < f2) {
       b = x2;
       x2 = x1;
       f2 = f1;
       x1 = b - g * (b - a);
-      f1 = dist(x1);
+      f1 = distanceAt(c, x1, tRe, tIm);
     } else {
       a = x1;
       x1 = x2;
       f1 = f2;
       x2 = a + g * (b - a);
-      f2 = dist(x2);
+      f2 = distanceAt(c, x2, tRe, tIm);
     }
   }
   return (a + b) / 2;
+}
+
+/**
+ * The conductivity of the homogeneous plate whose normalised ΔZ lies nearest (tRe, tIm) at
+ * angular frequency ω: a scan of the curve's grid within the σ range an instrument reports
+ * ({@link SIGMA_RANGE}), then a golden-section search between the neighbours of the best grid
+ * point. Returns σ (S/m), the relative distance of the fit and the fractional grid index.
+ */
+export function fitOnReferenceCurve(
+  curve: ReferenceCurve,
+  omega: number,
+  tRe: number,
+  tIm: number,
+  /** Golden-section stop, in grid steps (a grid step is 1/60 of a decade of σ). */
+  tolerance = 1e-7,
+): { apparentSPerM: number; fitResidual: number; index: number } {
+  const n = curve.re.length;
+  const first = curve.logP[0]!;
+  const range = curve.logP[n - 1]! - first;
+  // Only ωσ within this frequency's σ range may be chosen.
+  const toIndex = (p: number) => ((Math.log(p) - first) / range) * (n - 1);
+  let lo = Math.max(0, toIndex(omega * SIGMA_RANGE[0]));
+  let hi = Math.min(n - 1, toIndex(omega * SIGMA_RANGE[1]));
+  let best = Math.round(lo);
+  let bestDist = Infinity;
+  for (let i = Math.ceil(lo); i <= Math.floor(hi); i++) {
+    const dd = (curve.re[i]! - tRe) ** 2 + (curve.im[i]! - tIm) ** 2;
+    if (dd < bestDist) {
+      bestDist = dd;
+      best = i;
+    }
+  }
+  lo = Math.max(lo, best - 1);
+  hi = Math.min(hi, best + 1);
+  const x = nearestOnCurve(curve, tRe, tIm, lo, hi, tolerance);
+  const [fRe, fIm] = curveAt(curve, x);
+  const logP = first + (x / (n - 1)) * range;
+  return {
+    apparentSPerM: Math.exp(logP) / omega,
+    fitResidual: Math.hypot(fRe - tRe, fIm - tIm) / Math.hypot(tRe, tIm),
+    index: x,
+  };
 }
 
 export interface SweepOptions {
@@ -177,7 +237,6 @@ export function apparentConductivitySweep(
   const pMin = Math.min(...omegas) * SIGMA_RANGE[0];
   const pMax = Math.max(...omegas) * SIGMA_RANGE[1];
   const curve = referenceCurve(kernel, thickness, pMin, pMax, l0, options.deadline);
-  const n = curve.re.length;
   const points: ApparentConductivityPoint[] = [];
   for (const [index, frequencyHz] of frequenciesHz.entries()) {
     if (options.deadline !== undefined && performance.now() > options.deadline)
@@ -186,25 +245,7 @@ export function apparentConductivitySweep(
     const stack = impedanceAt(kernel, layers, frequencyHz, l0);
     const tRe = stack.normalizedResistance;
     const tIm = stack.normalizedReactance - 1;
-    // Only ωσ within this frequency's σ range may be chosen.
-    const toIndex = (p: number) =>
-      ((Math.log(p) - curve.logP[0]!) / (curve.logP[n - 1]! - curve.logP[0]!)) * (n - 1);
-    const lo = Math.max(0, toIndex(omega * SIGMA_RANGE[0]));
-    const hi = Math.min(n - 1, toIndex(omega * SIGMA_RANGE[1]));
-    let best = Math.round(lo);
-    let bestDist = Infinity;
-    for (let i = Math.ceil(lo); i <= Math.floor(hi); i++) {
-      const dd = (curve.re[i]! - tRe) ** 2 + (curve.im[i]! - tIm) ** 2;
-      if (dd < bestDist) {
-        bestDist = dd;
-        best = i;
-      }
-    }
-    const x = nearestOnCurve(curve, tRe, tIm, Math.max(lo, best - 1), Math.min(hi, best + 1));
-    const [fRe, fIm] = curveAt(curve, x);
-    const logP = curve.logP[0]! + (x / (n - 1)) * (curve.logP[n - 1]! - curve.logP[0]!);
-    const apparent = Math.exp(logP) / omega;
-    const fitResidual = Math.hypot(fRe - tRe, fIm - tIm) / Math.hypot(tRe, tIm);
+    const { apparentSPerM: apparent, fitResidual } = fitOnReferenceCurve(curve, omega, tRe, tIm);
     // The stack changes the coil's impedance by nothing a double holds (ΔZ = 0 at so low a
     // ωσ): no instrument reads it, and the fit's distance relative to it is 0/0.
     if (!Number.isFinite(fitResidual) || !Number.isFinite(apparent))

@@ -153,27 +153,81 @@ export function coilInAirInductance(kernel: DoddDeedsKernel): number {
  * R = (α − Y)/(α + Y) with Y from the layer recursion of physics.md (Dodd & Deeds' transfer
  * form): Y starts as α (air below) or β_N (half-space), and for each layer going up
  * Y ← β(Y + βt)/(β + Yt), with α_k = √(α² + jωµ0µ_kσ_k), β_k = α_k/µ_k, t = tanh(α_k d_k).
- * Written out in real arithmetic: this loop is the cost of every frequency point.
  */
 function reflectionIntegral(
   kernel: DoddDeedsKernel,
   layers: ConductorLayer[],
   omega: number,
 ): [number, number] {
-  const last = layers.at(-1)!;
-  const halfSpace = last.thicknessM === null;
-  const finite = halfSpace ? layers.length - 1 : layers.length;
+  return conductorIntegral(
+    kernel.alphas,
+    kernel.conductorWeights,
+    kernel.conductorNodes,
+    layers,
+    omega,
+  );
+}
+
+/**
+ * Re(α_k·d_k) beyond which tanh(α_k d_k) is 1 to the last bit of a double (e^{−2x} < 2⁻⁵³ from
+ * x ≈ 18.4): the layer then hides everything under it, and the recursion may start at its top
+ * with Y = β_k, as if it were a half-space.
+ */
+const OPAQUE_LAYER = 19;
+
+/**
+ * |α_k d_k| below which tanh is summed from its Taylor series to z⁹ (the next term is below
+ * 1e-12 of the sum there), sparing the exponential and the sine and cosine for thin platings.
+ */
+const THIN_LAYER = 0.1;
+
+/** Re(α_k·d) ≥ √(ωµ0µσ/2)·d for every α: true when the layer is opaque at every node. */
+function opaqueAtEveryNode(layer: ConductorLayer, omega: number): boolean {
+  return (
+    layer.thicknessM === null ||
+    Math.sqrt((omega * MU0 * layer.relativePermeability * layer.conductivitySPerM) / 2) *
+      layer.thicknessM >=
+      OPAQUE_LAYER
+  );
+}
+
+/**
+ * Σᵢ wᵢ·R(αᵢ) over the first `count` nodes: the conductor's part of the Dodd–Deeds integral
+ * with weights of the caller's choosing (the Sort Planner scales them by e^{−2αℓ} for each
+ * lift-off sample). Written out in real arithmetic with no allocation: this loop is the cost of
+ * every frequency point. Layers under one that is opaque at ω at every node (Re α_k ≥
+ * √(ωµ0µσ/2)) are skipped: they change nothing a double can hold.
+ */
+export function conductorIntegral(
+  alphas: Float64Array,
+  weights: Float64Array,
+  count: number,
+  layers: ConductorLayer[],
+  omega: number,
+): [number, number] {
+  let bottom = layers.length - 1;
+  for (let k = 0; k < layers.length; k++) {
+    if (opaqueAtEveryNode(layers[k]!, omega)) {
+      bottom = k;
+      break;
+    }
+  }
+  const last = layers[bottom]!;
+  const halfSpace = opaqueAtEveryNode(last, omega);
+  const finite = halfSpace ? bottom : bottom + 1;
+  const lastB = omega * MU0 * last.relativePermeability * last.conductivitySPerM;
+  const lastMu = last.relativePermeability;
   let sumRe = 0;
   let sumIm = 0;
-  for (let i = 0; i < kernel.conductorNodes; i++) {
-    const alpha = kernel.alphas[i]!;
+  for (let i = 0; i < count; i++) {
+    const alpha = alphas[i]!;
     const a2 = alpha * alpha;
     let yRe: number;
     let yIm: number;
     if (halfSpace) {
-      [yRe, yIm] = csqrt(a2, omega * MU0 * last.relativePermeability * last.conductivitySPerM);
-      yRe /= last.relativePermeability;
-      yIm /= last.relativePermeability;
+      const m = Math.sqrt(a2 * a2 + lastB * lastB);
+      yRe = Math.sqrt((m + a2) / 2) / lastMu;
+      yIm = Math.sqrt(Math.max(0, (m - a2) / 2)) / lastMu;
     } else {
       yRe = alpha;
       yIm = 0;
@@ -181,56 +235,75 @@ function reflectionIntegral(
     for (let k = finite - 1; k >= 0; k--) {
       const layer = layers[k]!;
       const mu = layer.relativePermeability;
-      const [akRe, akIm] = csqrt(a2, omega * MU0 * mu * layer.conductivitySPerM);
+      const b = omega * MU0 * mu * layer.conductivitySPerM;
+      // α_k = √(α² + jb), principal root
+      const m = Math.sqrt(a2 * a2 + b * b);
+      const akRe = Math.sqrt((m + a2) / 2);
+      const akIm = Math.sqrt(Math.max(0, (m - a2) / 2));
       const bRe = akRe / mu;
       const bIm = akIm / mu;
-      const [tRe, tIm] = ctanh(akRe * layer.thicknessM!, akIm * layer.thicknessM!);
+      const d = layer.thicknessM!;
+      let tRe: number;
+      let tIm: number;
+      const x = akRe * d;
+      if (x >= OPAQUE_LAYER) {
+        tRe = 1;
+        tIm = 0;
+      } else if (m * d * d < THIN_LAYER * THIN_LAYER) {
+        // tanh z = z − z³/3 + 2z⁵/15 − 17z⁷/315 + 62z⁹/2835, by Horner in z²
+        const zRe = x;
+        const zIm = akIm * d;
+        const z2Re = zRe * zRe - zIm * zIm;
+        const z2Im = 2 * zRe * zIm;
+        let pRe = 62 / 2835;
+        let pIm = 0;
+        for (const c of TANH_SERIES) {
+          const r = pRe * z2Re - pIm * z2Im + c;
+          pIm = pRe * z2Im + pIm * z2Re;
+          pRe = r;
+        }
+        tRe = pRe * zRe - pIm * zIm;
+        tIm = pRe * zIm + pIm * zRe;
+      } else {
+        // tanh(x + jy) through e^{−2z}, safe for thick layers
+        const e = Math.exp(-2 * x);
+        const y2 = 2 * akIm * d;
+        const eRe = e * Math.cos(y2);
+        const eIm = -e * Math.sin(y2);
+        const nRe = 1 - eRe;
+        const nIm = -eIm;
+        const dRe = 1 + eRe;
+        const dIm = eIm;
+        const dd = dRe * dRe + dIm * dIm;
+        tRe = (nRe * dRe + nIm * dIm) / dd;
+        tIm = (nIm * dRe - nRe * dIm) / dd;
+      }
       // num = β(Y + βt), den = β + Yt
-      const btRe = bRe * tRe - bIm * tIm;
-      const btIm = bRe * tIm + bIm * tRe;
-      const sRe = yRe + btRe;
-      const sIm = yIm + btIm;
+      const sRe = yRe + (bRe * tRe - bIm * tIm);
+      const sIm = yIm + (bRe * tIm + bIm * tRe);
       const numRe = bRe * sRe - bIm * sIm;
       const numIm = bRe * sIm + bIm * sRe;
       const denRe = bRe + (yRe * tRe - yIm * tIm);
       const denIm = bIm + (yRe * tIm + yIm * tRe);
-      const d = denRe * denRe + denIm * denIm;
-      yRe = (numRe * denRe + numIm * denIm) / d;
-      yIm = (numIm * denRe - numRe * denIm) / d;
+      const dd = denRe * denRe + denIm * denIm;
+      yRe = (numRe * denRe + numIm * denIm) / dd;
+      yIm = (numIm * denRe - numRe * denIm) / dd;
     }
     // R = (α − Y)/(α + Y)
     const nRe = alpha - yRe;
     const nIm = -yIm;
     const dRe = alpha + yRe;
     const dIm = yIm;
-    const d = dRe * dRe + dIm * dIm;
-    const rRe = (nRe * dRe + nIm * dIm) / d;
-    const rIm = (nIm * dRe - nRe * dIm) / d;
-    const wgt = kernel.conductorWeights[i]!;
-    sumRe += wgt * rRe;
-    sumIm += wgt * rIm;
+    const dd = dRe * dRe + dIm * dIm;
+    const w = weights[i]!;
+    sumRe += (w * (nRe * dRe + nIm * dIm)) / dd;
+    sumIm += (w * (nIm * dRe - nRe * dIm)) / dd;
   }
   return [sumRe, sumIm];
 }
 
-/** √(x + jy) for x ≥ 0, y ≥ 0, as [re, im]. */
-function csqrt(x: number, y: number): [number, number] {
-  const m = Math.hypot(x, y);
-  return [Math.sqrt((m + x) / 2), Math.sqrt(Math.max(0, (m - x) / 2))];
-}
-
-/** tanh(x + jy) for x ≥ 0 through e^{−2z}, safe for thick layers. */
-function ctanh(x: number, y: number): [number, number] {
-  const e = Math.exp(-2 * x);
-  const eRe = e * Math.cos(2 * y);
-  const eIm = -e * Math.sin(2 * y);
-  const nRe = 1 - eRe;
-  const nIm = -eIm;
-  const dRe = 1 + eRe;
-  const dIm = eIm;
-  const d = dRe * dRe + dIm * dIm;
-  return [(nRe * dRe + nIm * dIm) / d, (nIm * dRe - nRe * dIm) / d];
-}
+/** The series coefficients of tanh after the z⁹ one, highest first, for Horner's scheme in z². */
+const TANH_SERIES = [-17 / 315, 2 / 15, -1 / 3, 1];
 
 export interface ImpedancePoint {
   frequencyHz: number;

@@ -142,6 +142,19 @@ const states: State[] = [
       await page.getByText(/computed in \d+ ms/).waitFor({ timeout: 60_000 });
     },
   },
+  { name: 'sort-planner', who: 'visitor', path: '/sort-planner', ready: heading('Sort Planner') },
+  {
+    name: 'sort-planner-result',
+    who: 'curator',
+    path: '/sort-planner',
+    ready: async (page) => {
+      await page.getByRole('button', { name: 'The five Estmark coins' }).click();
+      await page.getByRole('button', { name: 'Evaluate the plan' }).click();
+      await page.getByTestId('recommended-frequency').waitFor({ timeout: 60_000 });
+      await page.getByRole('button', { name: 'Save this plan' }).click();
+      await page.getByRole('link', { name: 'C header' }).waitFor();
+    },
+  },
   { name: 'pulse-bench', who: 'visitor', path: '/pulse-bench', ready: heading('Pulse Bench') },
   {
     name: 'pulse-bench-run',

@@ -93,6 +93,21 @@ const routes: Array<{
     ready: (p) => p.getByRole('group', { name: 'Estmark 5 marks' }).waitFor(),
   },
   {
+    name: 'sort-planner',
+    who: 'visitor',
+    path: '/sort-planner',
+    ready: (p) => p.getByRole('heading', { name: 'Sort Planner', level: 1 }).waitFor(),
+  },
+  {
+    name: 'sort-planner-result',
+    who: 'visitor',
+    path: '/sort-planner',
+    ready: async (p) => {
+      await p.getByRole('button', { name: 'Evaluate the plan' }).click();
+      await p.getByTestId('recommended-frequency').waitFor({ timeout: 60_000 });
+    },
+  },
+  {
     name: 'pulse-bench',
     who: 'visitor',
     path: '/pulse-bench',
