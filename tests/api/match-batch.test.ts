@@ -1,13 +1,14 @@
 import { execFile } from 'node:child_process';
-import type http from 'node:http';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { Readable } from 'node:stream';
 import { promisify } from 'node:util';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BATCH_CSV_COLUMNS, type BatchLine } from '../../shared/match/batch-results';
 import { MAX_BATCH_BYTES, MAX_BATCH_ROWS, readBatch } from '../../backend/services/match-batch';
-import { bearer, newKey, signedIn } from '../helpers/access';
-import { createTestApp, type TestApp } from '../helpers/test-app';
+import { bearer, demo, newKey, sessionCookieOf, signedIn } from '../helpers/access';
+import { createTestApp, TEST_PUBLIC_URL, type TestApp } from '../helpers/test-app';
 
 const run = promisify(execFile);
 let t: TestApp;
@@ -326,6 +327,60 @@ describe('POST /api/v1/match/batch', () => {
       await limited.knex.destroy();
     });
   });
+});
+
+describe('two batches at once at most', () => {
+  it('a third while two are uploading is told to come back (503, Retry-After); then all go on', async () => {
+    const server = http.createServer(t.app).listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    const { port } = server.address() as AddressInfo;
+    const { email, password } = demo('integrator');
+    const signIn = await request(t.app)
+      .post('/api/v1/auth/sign-in')
+      .set('Origin', TEST_PUBLIC_URL)
+      .send({ email, password });
+    const headers = {
+      'Content-Type': 'text/csv',
+      Cookie: `conductory_session=${sessionCookieOf(signIn.headers['set-cookie'])}`,
+      Origin: TEST_PUBLIC_URL,
+    };
+    /** A batch whose upload is still going on: the header sent, the rest when finish() is called. */
+    const open = () => {
+      let finish!: () => void;
+      const answer = new Promise<number>((resolve, reject) => {
+        const req = http.request(
+          { host: '127.0.0.1', port, method: 'POST', path: URL, headers },
+          (res) => {
+            res.resume();
+            res.on('end', () => resolve(res.statusCode!));
+          },
+        );
+        req.on('error', reject);
+        req.write(`${HEADER}\r\n`);
+        finish = () => req.end('R-102,25.6,27,8.49,60\r\n');
+      });
+      return { answer, finish: () => finish() };
+    };
+    const first = open();
+    const second = open();
+    const third = () =>
+      request(server).post(URL).set(headers).send(`${HEADER}\r\nR-103,97.8,27,8.90,60\r\n`);
+    // The two take their places as soon as their headers are read; ask until the third is refused.
+    let refused: request.Response | undefined;
+    for (let attempt = 0; attempt < 50 && !refused; attempt++) {
+      const res = await third();
+      if (res.status === 503) refused = res;
+      else await new Promise((r) => setTimeout(r, 100));
+    }
+    expect(refused?.headers['retry-after']).toBe('5');
+    expectProblem(refused!, 503, /Other batches are being matched/);
+    first.finish();
+    second.finish();
+    expect(await first.answer).toBe(200);
+    expect(await second.answer).toBe(200);
+    expect((await third()).status).toBe(200);
+    server.close();
+  }, 60_000);
 });
 
 describe('100,000 readings stream with bounded memory', () => {
