@@ -52,6 +52,7 @@ import { createReleaseService } from './services/releases';
 import { estimatesRouter } from './routes/estimates';
 import { healthRouter } from './routes/health';
 import { matchRouter } from './routes/match';
+import { matchBatchRouter } from './routes/match-batch';
 import { readingsRouter } from './routes/readings';
 import { sortPlansRouter } from './routes/sort-plans';
 import { stacksRouter } from './routes/stacks';
@@ -156,8 +157,10 @@ export function createApp(options: AppOptions): Express {
       validateResponses: true,
       // Access is decided by enforceRoles from x-roles; the document's security block is for readers.
       validateSecurity: false,
-      // The upload is checked by multer (with limits) and the import service instead.
-      ignorePaths: /^\/(?!api\/v1\/)|^\/api\/v1\/imports\/?$/,
+      // The uploads are checked by multer (with limits) and their services instead: the
+      // validator's multipart path has no limits, and it would read a batch's body before its
+      // route could parse it as it streams (routes/match-batch.ts checks the query itself).
+      ignorePaths: /^\/(?!api\/v1\/)|^\/api\/v1\/imports\/?$|^\/api\/v1\/match\/batch$/,
     }),
   );
 
@@ -186,6 +189,7 @@ export function createApp(options: AppOptions): Express {
     }),
   );
   v1.use(matchRouter(catalogue));
+  v1.use(matchBatchRouter(catalogue));
   v1.use(readingsRouter(createReadingRepository(knex)));
   const stacks = createStackRepository(knex);
   const estimatePool = options.estimatePool ?? createEstimatePool();

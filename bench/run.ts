@@ -1,7 +1,7 @@
 /**
  * `npm run bench`: catalogue search and Match against a bare Express JSON endpoint, with autocannon
  * on loopback in the same run; prints throughput, p50/p99 latency and the ratio to the bare
- * endpoint. Ratios travel between machines; absolute numbers do not. No assertion: a report.
+ * endpoint; then a batch Match of 10,000 readings against as many single Matches. Ratios travel between machines; absolute numbers do not. No assertion: a report.
  */
 import { fork } from 'node:child_process';
 import path from 'node:path';
@@ -9,6 +9,7 @@ import autocannon from 'autocannon';
 import { projectRoot } from '../backend/paths';
 import { benchPhysics } from './physics';
 import { benchSortPlan } from './sort-plan';
+import { benchBatchMatch, printBatchBench } from './match-batch';
 import { initialJavaScript, INITIAL_JS_BUDGET_KB } from './initial-js';
 import { heaviestLaunch } from '../tests/helpers/launches';
 
@@ -114,6 +115,8 @@ async function healthUnderLoad() {
   await Promise.all(launchers);
   return { result, statuses };
 }
+process.stdout.write('  batch Match against single Matches…\n');
+const batch = await benchBatchMatch(ports.product);
 process.stdout.write('  /health while the calculators are saturated…\n');
 const saturated = await healthUnderLoad();
 servers.disconnect();
@@ -141,6 +144,8 @@ console.log(
     `\n  launch answers: ${[...saturated.statuses].map(([s, n]) => `${n} × ${s}`).join(', ')}` +
     `\n  (aim, issue 8: p99 under 50 ms)`,
 );
+
+printBatchBench(batch);
 
 const js = initialJavaScript();
 console.log(

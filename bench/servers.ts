@@ -17,7 +17,8 @@ import { prepareDatabase } from '../backend/db/prepare';
 
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'conductory-bench-'));
 const knex = createKnex(path.join(dir, 'bench.sqlite'));
-await prepareDatabase(knex, { demo: true });
+// The demo accounts too: the batch Match bench calls as the demo integrator.
+await prepareDatabase(knex, { demo: true, demoAccounts: true });
 // Logged as `npm start` logs (info, one line per request); the parent sends this process's
 // stdout to /dev/null so the lines cost what they cost in production, without flooding the report.
 // Rate limits are lifted: the benchmark measures the service, not the limiter's 429s.

@@ -16,7 +16,10 @@ export const DEFAULT_ESTIMATE_LIMITS: EstimateLimits = {
   admin: 240,
 };
 
-/** Applies to the calculations (POSTs tagged `estimates` in openapi.yaml); others pass untouched. */
+/**
+ * Applies to the calculations (POSTs tagged `estimates` in openapi.yaml) and to other heavy
+ * operations (`x-heavy: true`, e.g. a batch Match, counted as one); others pass untouched.
+ */
 export function estimateRateLimit(limits: EstimateLimits): RequestHandler {
   const limiter = rateLimit({
     windowMs: 60_000,
@@ -39,7 +42,7 @@ export function estimateRateLimit(limits: EstimateLimits): RequestHandler {
       ),
   });
   return (req, res, next) =>
-    req.method === 'POST' && req.operation?.tags.includes('estimates')
+    req.method === 'POST' && (req.operation?.tags.includes('estimates') || req.operation?.heavy)
       ? limiter(req, res, next)
       : next();
 }

@@ -10,6 +10,8 @@ export interface ResolvedOperation {
   template: string;
   roles: Caller[];
   tags: string[];
+  /** x-heavy: counted by the calculations' rate limit like an estimate (a batch, a plan). */
+  heavy: boolean;
 }
 
 declare module 'express-serve-static-core' {
@@ -47,7 +49,7 @@ export function operationTable(doc: ApiDocument): Route[] {
     const operations = new Map<string, ResolvedOperation>();
     for (const [method, op] of Object.entries(item)) {
       if (!METHODS.includes(method)) continue;
-      const o = op as { 'x-roles'?: Caller[]; tags?: string[] };
+      const o = op as { 'x-roles'?: Caller[]; tags?: string[]; 'x-heavy'?: boolean };
       if (!o['x-roles'])
         throw new Error(`openapi.yaml: ${method.toUpperCase()} ${template} has no x-roles`);
       operations.set(method.toUpperCase(), {
@@ -55,6 +57,7 @@ export function operationTable(doc: ApiDocument): Route[] {
         template,
         roles: o['x-roles'],
         tags: o.tags ?? [],
+        heavy: o['x-heavy'] === true,
       });
     }
     const segments = template

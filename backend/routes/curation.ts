@@ -1,8 +1,9 @@
-import { Router, type ErrorRequestHandler, type Request, type Response } from 'express';
+import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
 import { stringify } from 'csv-stringify/sync';
 import { percentIacs } from '../../shared/units/conductivity';
 import { ProblemError } from '../http/problem';
+import { uploadErrors } from '../http/upload-errors';
 import type { CatalogueStore } from '../services/catalogue-store';
 import type { CurationService } from '../services/curation';
 import { parsingStorage, type ParsedFile } from '../services/import-storage';
@@ -29,26 +30,6 @@ const userOf = (req: Request) => (req.principal as { userId: number }).userId;
 export function defuse(value: unknown): unknown {
   return typeof value === 'string' && /^[=+\-@\t\r\n]/.test(value) ? `'${value}` : value;
 }
-
-/** multer's errors as problems: too large is a 413, the rest a 400 naming the field. */
-const uploadErrors: ErrorRequestHandler = (error, _req, _res, next) => {
-  if (error instanceof multer.MulterError) {
-    const status =
-      error.code === 'LIMIT_FILE_SIZE' || error.code === 'LIMIT_FIELD_VALUE' ? 413 : 400;
-    return next(
-      new ProblemError(
-        status,
-        status === 413 ? 'Request body too large' : 'Bad request',
-        `${error.message}${error.field ? ` (${error.field})` : ''}`,
-      ),
-    );
-  }
-  // busboy's own complaints (no boundary, a body cut short) arrive as plain Errors: still the
-  // client's malformed upload, not a fault of ours.
-  if (error instanceof Error && /^(Multipart|Unexpected end of form|Malformed)/.test(error.message))
-    return next(new ProblemError(400, 'Bad request', error.message));
-  next(error);
-};
 
 export function curationRouter(
   curation: CurationService,

@@ -28,7 +28,7 @@ export interface MatchCandidate {
 }
 
 /** Candidates below this score are noise: a reading some three uncertainties outside the range. */
-const MIN_SCORE = 0.005;
+export const MIN_SCORE = 0.005;
 
 /**
  * Ranks every alloy against a reading, best first, and keeps the first `limit`. A reading taken

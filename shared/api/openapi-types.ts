@@ -100,6 +100,67 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/match/batch": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Rank the candidates of many readings (a CSV file), streamed back
+         * @description A CSV of readings in, the three best candidates of each out, scored as POST /match scores
+         *     one reading. Send the file as a `text/csv` body (UTF-8) or as a `multipart/form-data`
+         *     upload in the field `file`. Up to 100,000 readings and 20 MiB; a larger file is refused
+         *     (413) and a binary one too (415). The file is parsed as it arrives; once it has all
+         *     arrived and fits the limits, the answer streams back as it is computed, one line per
+         *     reading in file order: `text/csv` (the default) or `application/x-ndjson`, by `Accept`.
+         *     The header `X-Batch-Rows` says how many lines follow (and `X-Batch-Errors` how many of
+         *     them are errors), so a client can show progress and tell a cut answer from a whole one.
+         *
+         *     Columns (the first line names them; names ignore case, units in brackets do not):
+         *     - `id`: optional, your label for the reading (up to 100 characters), echoed back.
+         *     - `conductivity` or `resistivity`: the reading, its unit in the header, e.g.
+         *       `conductivity (%IACS)`, `resistivity (uohm_cm)`, or in a `conductivity_unit` /
+         *       `resistivity_unit` column per row. Units: S/m, MS/m, %IACS; ohm_m, uohm_cm, nohm_m.
+         *     - `temperature`: of the piece, e.g. `temperature (C)` (C, K, F), from −50 °C to 200 °C.
+         *     - `density`: optional, e.g. `density (g/cm3)` (kg/m3, g/cm3, lb/in3).
+         *     - `frequency`: optional, e.g. `frequency (kHz)` (Hz, kHz, MHz); echoed back, not used to
+         *       rank the table (its figures are for direct current).
+         *     - `uncertainty_percent`: optional, relative standard uncertainty, 0.1 to 50 (default 2).
+         *
+         *     Unknown, repeated or missing columns, or a missing header, refuse the whole file (400).
+         *     A row with a bad value gets its own line with `status: error`, its row (the line of the
+         *     file, the header being line 1) and the reason; the rest go on. A file whose CSV breaks
+         *     (an unclosed quote) is refused whole (400). Counted as one calculation by the rate limit;
+         *     two batches run at once at most (503 with Retry-After beyond that).
+         */
+        post: operations["matchBatch"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/match/batch/template": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /** A CSV template for a batch Match (the demo recycler's readings, invented) */
+        get: operations["getMatchBatchTemplate"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/readings": {
         parameters: {
             query?: never;
@@ -1034,6 +1095,33 @@ export interface components {
             /** @default 10 */
             limit: number;
         };
+        /** @description One line of NDJSON per reading; a bad row has status error and its reason. */
+        BatchLine: {
+            /** @description The line of the file (the header is line 1). */
+            row: number;
+            id: string | null;
+            /** @enum {string} */
+            status: "matched" | "none";
+            reading: {
+                conductivitySPerM: number;
+                temperatureK: number;
+                densityKgPerM3: number | null;
+                frequencyHz: number | null;
+                uncertaintyPercent: number;
+            };
+            candidates: {
+                slug: string;
+                name: string;
+                uns: string | null;
+                score: number;
+            }[];
+        } | {
+            row: number;
+            id: string | null;
+            /** @enum {string} */
+            status: "error";
+            error: string;
+        };
         MatchCandidate: {
             slug: string;
             name: string;
@@ -1767,6 +1855,64 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["MatchResult"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    matchBatch: {
+        parameters: {
+            query?: {
+                /** @description The id of a saved sort plan, to classify each reading by the plan's windows instead of ranking the table. Saved plans are not available yet: a plan is refused (422). */
+                plan?: number;
+            };
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "text/csv": string;
+                "multipart/form-data": {
+                    /** Format: binary */
+                    file: string;
+                };
+            };
+        };
+        responses: {
+            /** @description One line per reading, in file order. */
+            200: {
+                headers: {
+                    /** @description The lines that follow (readings and bad rows). */
+                    "X-Batch-Rows"?: number;
+                    /** @description How many of them are bad rows. */
+                    "X-Batch-Errors"?: number;
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
+                    "application/x-ndjson": components["schemas"]["BatchLine"];
+                };
+            };
+            default: components["responses"]["Problem"];
+        };
+    };
+    getMatchBatchTemplate: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The template. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "text/csv": string;
                 };
             };
             default: components["responses"]["Problem"];

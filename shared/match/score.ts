@@ -5,6 +5,7 @@ import {
   baseMetalsFrom,
   estimateAlpha,
   mainElement,
+  type AlphaEstimate,
   type BaseMetal,
   type TemperatureCorrection,
 } from './temperature-estimate';
@@ -71,6 +72,138 @@ function closeness(
   return Math.exp(-0.5 * (outside / u) ** 2) * (0.75 + 0.25 * nearNominal);
 }
 
+/** What scoring a reading against one alloy needs from the table, worked out once per alloy. */
+export interface AlloyScoring {
+  alloy: AlloyRecord;
+  /** The temperature the alloy's conductivity refers to, K. */
+  referenceK: number;
+  /** The alloy's conductivity range at referenceK (a nominal alone widened by ±2 %), S/m. */
+  conductivity: ScoredRange;
+  /** How a reading at another temperature is brought to referenceK. */
+  alpha:
+    | { kind: 'recorded'; alphaPerK: number }
+    | { kind: 'estimated'; estimate: AlphaEstimate }
+    | { kind: 'unknown' };
+  density: ScoredRange | null;
+}
+
+/**
+ * The per-alloy part of {@link scoreCandidate}: its ranges and how its coefficient is known. A
+ * batch of readings prepares the table once and scores every reading with {@link scorePrepared};
+ * null for an alloy with no conductivity on record.
+ */
+export function alloyScoring(
+  alloy: AlloyRecord,
+  bases: Map<string, BaseMetal> = baseMetalsFrom([alloy]),
+): AlloyScoring | null {
+  const conductivity = valueOf(alloy, 'conductivity');
+  if (!conductivity) return null;
+  const recorded = valueOf(alloy, 'resistivity_temperature_coefficient')?.nominal;
+  let alpha: AlloyScoring['alpha'];
+  if (recorded !== undefined) alpha = { kind: 'recorded', alphaPerK: recorded };
+  else {
+    const element = mainElement(alloy);
+    const base = element ? bases.get(element) : undefined;
+    alpha = base
+      ? { kind: 'estimated', estimate: estimateAlpha(1 / conductivity.nominal, base) }
+      : { kind: 'unknown' };
+  }
+  const nominal = conductivity.nominal;
+  const density = valueOf(alloy, 'density');
+  return {
+    alloy,
+    referenceK: conductivity.referenceTemperatureK,
+    conductivity: {
+      min: conductivity.min ?? nominal * (1 - DEFAULT_HALF_RANGE),
+      nominal,
+      max: conductivity.max ?? nominal * (1 + DEFAULT_HALF_RANGE),
+    },
+    alpha,
+    density: density
+      ? {
+          min: density.min ?? density.nominal * (1 - DEFAULT_HALF_RANGE),
+          nominal: density.nominal,
+          max: density.max ?? density.nominal * (1 + DEFAULT_HALF_RANGE),
+        }
+      : null,
+  };
+}
+
+/** The figures of one comparison, before any words are put to them. */
+export interface PreparedScore {
+  score: number;
+  /** The reading at the reference temperature (the middle of `spread` when α is unknown), S/m. */
+  sigma: number;
+  /** The corrected reading's bounds where the coefficient is only known within bounds, S/m. */
+  spread: [number, number];
+  /** Whether the reading was corrected at all (not when read within 0.05 K of the reference). */
+  corrected: boolean;
+  /** The density fit (1 inside the range) when a density was given and the table has one. */
+  densityFit: number | null;
+}
+
+/**
+ * The reading at the reference temperature for a coefficient anywhere from `low` to `high`, S/m.
+ * A function of its own rather than a closure: the batch path calls scorePrepared millions of
+ * times, and a closure made per call costs more than the arithmetic.
+ */
+function bounded(
+  read: number,
+  measuredK: number,
+  referenceK: number,
+  low: number,
+  high: number,
+): [number, number] {
+  const a = conductivityAtReference(read, measuredK, referenceK, low);
+  const b = conductivityAtReference(read, measuredK, referenceK, high);
+  return [Math.min(a, b), Math.max(a, b)];
+}
+
+/**
+ * The score of {@link scoreCandidate} without its reasons: arithmetic only, so that a batch of
+ * readings costs a fraction of a microsecond per alloy. Throws InvalidQuantityError where the
+ * alloy's coefficient turns the linear law negative at the reading's temperature.
+ */
+export function scorePrepared(reading: MatchReading, s: AlloyScoring): PreparedScore {
+  const read = reading.conductivitySPerM;
+  const referenceK = s.referenceK;
+  const measuredK = reading.temperatureK ?? referenceK;
+  let sigma = read;
+  let spread: [number, number] = [read, read];
+  let weight = 1;
+  const corrected = Math.abs(measuredK - referenceK) > 0.05;
+  if (corrected) {
+    if (s.alpha.kind === 'recorded') {
+      sigma = conductivityAtReference(read, measuredK, referenceK, s.alpha.alphaPerK);
+      spread = [sigma, sigma];
+    } else if (s.alpha.kind === 'estimated') {
+      const e = s.alpha.estimate;
+      sigma = conductivityAtReference(read, measuredK, referenceK, e.alphaPerK);
+      spread = bounded(read, measuredK, referenceK, e.lowPerK, e.highPerK);
+    } else {
+      spread = bounded(read, measuredK, referenceK, ...UNKNOWN_ALPHA_BOUNDS);
+      sigma = (spread[0] + spread[1]) / 2;
+      weight = UNCORRECTED_WEIGHT;
+    }
+  }
+  const { nominal, min, max } = s.conductivity;
+  const u = (reading.uncertaintyPercent / 100) * sigma;
+  let score = weight * closeness(sigma, nominal, min, max, u, spread);
+  let densityFit: number | null = null;
+  if (reading.densityKgPerM3 !== undefined && s.density) {
+    const du = (DENSITY_UNCERTAINTY_PERCENT / 100) * reading.densityKgPerM3;
+    densityFit = closeness(
+      reading.densityKgPerM3,
+      s.density.nominal,
+      s.density.min,
+      s.density.max,
+      du,
+    );
+    score *= densityFit;
+  }
+  return { score, sigma, spread, corrected, densityFit };
+}
+
 /**
  * Scores how well a reading fits one alloy: the reading is corrected to the table's reference
  * temperature (linear law, IEC 60028) with the alloy's own coefficient where one is recorded, or
@@ -87,70 +220,45 @@ export function scoreCandidate(
   alloy: AlloyRecord,
   bases: Map<string, BaseMetal> = baseMetalsFrom([alloy]),
 ): CandidateScore | null {
-  const conductivity = valueOf(alloy, 'conductivity');
-  if (!conductivity) return null;
+  const s = alloyScoring(alloy, bases);
+  if (!s) return null;
+  const { score, sigma, spread, corrected, densityFit } = scorePrepared(reading, s);
   const reasons: string[] = [];
-  const referenceK = conductivity.referenceTemperatureK;
+  const referenceK = s.referenceK;
   const measuredK = reading.temperatureK ?? referenceK;
-  const recorded = valueOf(alloy, 'resistivity_temperature_coefficient')?.nominal;
   const read = reading.conductivitySPerM;
-  const dT = measuredK - referenceK;
   const at = formatCelsius(referenceK);
   const readAt = `${formatIacs(read)} %IACS read at ${formatCelsius(measuredK)}`;
-
-  let sigma = read;
-  /** The corrected reading's bounds where the coefficient is only known within bounds. */
-  let spread: [number, number] = [read, read];
-  let weight = 1;
   let correction: TemperatureCorrection;
-  const bounded = (low: number, high: number): [number, number] => {
-    const a = conductivityAtReference(read, measuredK, referenceK, low);
-    const b = conductivityAtReference(read, measuredK, referenceK, high);
-    return [Math.min(a, b), Math.max(a, b)];
-  };
-  if (Math.abs(dT) <= 0.05) {
+  if (!corrected) {
     correction = {
       kind: 'none',
       rule: `read at the reference temperature (${at}): nothing to correct`,
     };
-  } else if (recorded !== undefined) {
-    sigma = conductivityAtReference(read, measuredK, referenceK, recorded);
-    spread = [sigma, sigma];
+  } else if (s.alpha.kind === 'recorded') {
+    const recorded = s.alpha.alphaPerK;
     correction = { kind: 'recorded', alphaPerK: recorded };
     reasons.push(
       `${readAt} corrects to ${formatIacs(sigma)} %IACS at ${at} (α = ${recorded.toPrecision(3)} /K)`,
     );
+  } else if (s.alpha.kind === 'estimated') {
+    const estimate = s.alpha.estimate;
+    const rule = `Matthiessen's rule from ${estimate.base.from}: α ≈ α_base·ρ_base/ρ_alloy = ${estimate.lowPerK.toPrecision(2)} /K, up to ${estimate.highPerK.toPrecision(2)} /K`;
+    correction = { kind: 'estimated', alphaPerK: estimate.alphaPerK, rule };
+    reasons.push(
+      `no temperature coefficient on record: estimated by ${rule}; ${readAt} corrects to ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}`,
+    );
   } else {
-    const element = mainElement(alloy);
-    const base = element ? bases.get(element) : undefined;
-    if (base) {
-      const estimate = estimateAlpha(1 / conductivity.nominal, base);
-      sigma = conductivityAtReference(read, measuredK, referenceK, estimate.alphaPerK);
-      spread = bounded(estimate.lowPerK, estimate.highPerK);
-      const rule = `Matthiessen's rule from ${base.from}: α ≈ α_base·ρ_base/ρ_alloy = ${estimate.lowPerK.toPrecision(2)} /K, up to ${estimate.highPerK.toPrecision(2)} /K`;
-      correction = { kind: 'estimated', alphaPerK: estimate.alphaPerK, rule };
-      reasons.push(
-        `no temperature coefficient on record: estimated by ${rule}; ${readAt} corrects to ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}`,
-      );
-    } else {
-      spread = bounded(UNKNOWN_ALPHA_BOUNDS[0], UNKNOWN_ALPHA_BOUNDS[1]);
-      sigma = (spread[0] + spread[1]) / 2;
-      weight = UNCORRECTED_WEIGHT;
-      correction = {
-        kind: 'none',
-        rule: `no coefficient on record and no base metal to estimate one: α taken anywhere from ${UNKNOWN_ALPHA_BOUNDS[0]} to ${UNKNOWN_ALPHA_BOUNDS[1]} /K and the score halved`,
-      };
-      reasons.push(
-        `no temperature coefficient on record and none to estimate: the reading at ${formatCelsius(measuredK)} could be ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}; ranked at half its score`,
-      );
-    }
+    correction = {
+      kind: 'none',
+      rule: `no coefficient on record and no base metal to estimate one: α taken anywhere from ${UNKNOWN_ALPHA_BOUNDS[0]} to ${UNKNOWN_ALPHA_BOUNDS[1]} /K and the score halved`,
+    };
+    reasons.push(
+      `no temperature coefficient on record and none to estimate: the reading at ${formatCelsius(measuredK)} could be ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}; ranked at half its score`,
+    );
   }
 
-  const nominal = conductivity.nominal;
-  const min = conductivity.min ?? nominal * (1 - DEFAULT_HALF_RANGE);
-  const max = conductivity.max ?? nominal * (1 + DEFAULT_HALF_RANGE);
-  const u = (reading.uncertaintyPercent / 100) * sigma;
-  let score = weight * closeness(sigma, nominal, min, max, u, spread);
+  const { min, max } = s.conductivity;
   if (spread[1] >= min && spread[0] <= max) {
     reasons.push(`${formatIacs(sigma)} %IACS at ${at} lies inside ${formatIacsRange(min, max)}`);
   } else {
@@ -161,18 +269,12 @@ export function scoreCandidate(
     );
   }
 
-  const density = valueOf(alloy, 'density');
-  const dMin = density ? (density.min ?? density.nominal * (1 - DEFAULT_HALF_RANGE)) : 0;
-  const dMax = density ? (density.max ?? density.nominal * (1 + DEFAULT_HALF_RANGE)) : 0;
-  if (reading.densityKgPerM3 !== undefined && density) {
-    const du = (DENSITY_UNCERTAINTY_PERCENT / 100) * reading.densityKgPerM3;
-    const fit = closeness(reading.densityKgPerM3, density.nominal, dMin, dMax, du);
-    score *= fit;
+  if (densityFit !== null && reading.densityKgPerM3 !== undefined && s.density) {
     const given = formatGPerCm3(reading.densityKgPerM3);
     reasons.push(
-      fit > 0.5
-        ? `density ${given} matches ${formatGPerCm3(density.nominal)}`
-        : `density ${given} is off the handbook ${formatGPerCm3(density.nominal)}`,
+      densityFit > 0.5
+        ? `density ${given} matches ${formatGPerCm3(s.density.nominal)}`
+        : `density ${given} is off the handbook ${formatGPerCm3(s.density.nominal)}`,
     );
   }
 
@@ -184,8 +286,8 @@ export function scoreCandidate(
   return {
     score,
     correctedConductivitySPerM: sigma,
-    conductivityRangeSPerM: { min, nominal, max },
-    densityRangeKgPerM3: density ? { min: dMin, nominal: density.nominal, max: dMax } : null,
+    conductivityRangeSPerM: s.conductivity,
+    densityRangeKgPerM3: s.density,
     correction,
     reasons,
   };

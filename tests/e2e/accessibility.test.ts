@@ -127,6 +127,41 @@ const states: State[] = [
     },
   },
   {
+    name: 'match-batch-result',
+    who: 'curator',
+    path: '/match',
+    ready: async (page) => {
+      // Many readings: the demo recycler's invented readings, one of them a bad row.
+      const csv =
+        'id,conductivity (%IACS),temperature (C),density (g/cm3)\r\nR-102 brass fitting,25.6,27,8.49\r\nR-1xx smudged,abc,27,8.49\r\n';
+      await page
+        .getByLabel('CSV file of readings')
+        .setInputFiles({ name: 'line.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+      await page.getByRole('button', { name: 'Match the file' }).click();
+      await page.getByRole('list', { name: 'Bad rows' }).waitFor({ timeout: 30_000 });
+    },
+  },
+  {
+    name: 'match-batch-refused',
+    who: 'curator',
+    path: '/match',
+    ready: async (page) => {
+      await page.getByLabel('CSV file of readings').setInputFiles({
+        name: 'wrong.csv',
+        mimeType: 'text/csv',
+        buffer: Buffer.from('id,colour\r\nx,red\r\n'),
+      });
+      await page.getByRole('button', { name: 'Match the file' }).click();
+      await page.getByRole('alert').filter({ hasText: 'Unknown column' }).waitFor();
+    },
+  },
+  {
+    name: 'match-batch-reader',
+    who: 'reader',
+    path: '/match',
+    ready: (page) => page.getByText(/your role is reader/).waitFor(),
+  },
+  {
     name: 'layer-lab',
     who: 'visitor',
     path: '/layer-lab',

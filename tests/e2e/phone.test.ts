@@ -87,6 +87,21 @@ const routes: Array<{
     ready: (p) => p.getByRole('heading', { name: 'Match', level: 1 }).waitFor(),
   },
   {
+    name: 'match-batch',
+    who: 'curator',
+    path: '/match',
+    ready: async (p) => {
+      // Many readings: the demo recycler's invented readings, one of them a bad row.
+      const csv =
+        'id,conductivity (%IACS),temperature (C),density (g/cm3)\r\nR-102 brass fitting,25.6,27,8.49\r\nR-1xx smudged,abc,27,8.49\r\n';
+      await p
+        .getByLabel('CSV file of readings')
+        .setInputFiles({ name: 'line.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+      await p.getByRole('button', { name: 'Match the file' }).click();
+      await p.getByRole('list', { name: 'Bad rows' }).waitFor({ timeout: 30_000 });
+    },
+  },
+  {
     name: 'layer-lab',
     who: 'visitor',
     path: '/layer-lab',

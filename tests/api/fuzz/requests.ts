@@ -243,6 +243,65 @@ function importBodyArb(hints: GenOptions['hints']): fc.Arbitrary<FuzzBody> {
   );
 }
 
+/**
+ * POST /match/batch takes a CSV as a text/csv body or a multipart upload, and is skipped by the
+ * validator: headers of every kind (units in brackets, unit columns, unknown and missing
+ * columns), rows of random cells, binary text, and bodies of other types.
+ */
+function batchBodyArb(): fc.Arbitrary<FuzzBody> {
+  const header = fc.constantFrom(
+    'id,conductivity (%IACS),temperature (C),density (g/cm3),frequency (kHz)',
+    'id,resistivity,resistivity_unit,temperature,temperature_unit,uncertainty_percent',
+    'conductivity (MS/m),temperature (K)',
+    'conductivity,temperature (C)',
+    'id,conductivity (mS/m),temperature (C)',
+    'id,colour',
+    'R-1,28,20',
+    '',
+  );
+  const cell = fc.oneof(
+    fc.constantFrom('', '28', '25.6', '27', '8.49', '60', 'uohm_cm', '%IACS', 'F', 'K', '6,16'),
+    fc.constantFrom('-1', '0', '1e999', 'NaN', 'Infinity', '1e-320', '=cmd|x', '"q""', '400'),
+    fc.string({ maxLength: 8, unit: 'grapheme' }),
+  );
+  const row = fc.array(cell, { minLength: 0, maxLength: 7 }).map((cells) => cells.join(','));
+  const csv = fc.oneof(
+    fc.tuple(header, fc.array(row, { maxLength: 5 })).map(([h, rows]) => [h, ...rows].join('\r\n')),
+    fc.string({ maxLength: 200, unit: 'binary' }),
+    fc.constantFrom('\uFEFFconductivity (%IACS),temperature (C)\n28,20\n', '\u0000\u0000', '"'),
+  );
+  return fc.oneof(
+    {
+      weight: 5,
+      arbitrary: fc
+        .tuple(
+          fc.constantFrom('text/csv', 'text/csv; charset=utf-8', 'text/csv; charset=latin1'),
+          csv,
+        )
+        .map(([contentType, text]): FuzzBody => ({ kind: 'text', contentType, text })),
+    },
+    {
+      weight: 3,
+      arbitrary: fc
+        .record({
+          file: fc.option(
+            fc.record({ name: fc.constantFrom('a.csv', 'noext', '..\\x.csv'), text: csv }),
+            { nil: undefined, freq: 6 },
+          ),
+          fields: fc.array(
+            fc.tuple(fc.constantFrom('file', 'plan', 'extra'), fc.string({ maxLength: 8 })),
+            {
+              maxLength: 2,
+            },
+          ),
+        })
+        .map((m): FuzzBody => ({ kind: 'multipart', ...m })),
+    },
+    { weight: 1, arbitrary: fc.constantFrom(...RAW_BODIES) },
+    { weight: 1, arbitrary: fc.constant<FuzzBody>({ kind: 'none' }) },
+  );
+}
+
 export interface BodyShaping {
   /** Turns a schema-valid body into one the operation can use (outer radius beyond inner...); gets a copy. */
   refine?: (body: unknown) => unknown;
@@ -273,16 +332,18 @@ export function requestArb(
   const body: fc.Arbitrary<FuzzBody> =
     op.template === '/imports'
       ? importBodyArb(options.hints)
-      : schema
-        ? jsonBodyArb(doc, schema, options, shaping)
-        : fc.oneof(
-            { weight: 12, arbitrary: fc.constant<FuzzBody>({ kind: 'none' }) },
-            {
-              weight: 1,
-              arbitrary: hostileValue.map((value): FuzzBody => ({ kind: 'json', value })),
-            },
-            { weight: 1, arbitrary: fc.constantFrom(...RAW_BODIES) },
-          );
+      : op.template === '/match/batch'
+        ? batchBodyArb()
+        : schema
+          ? jsonBodyArb(doc, schema, options, shaping)
+          : fc.oneof(
+              { weight: 12, arbitrary: fc.constant<FuzzBody>({ kind: 'none' }) },
+              {
+                weight: 1,
+                arbitrary: hostileValue.map((value): FuzzBody => ({ kind: 'json', value })),
+              },
+              { weight: 1, arbitrary: fc.constantFrom(...RAW_BODIES) },
+            );
   return fc.record({ path: pathArb, query, body }).map(({ path, query: q, body: b }) => ({
     method: op.method,
     url: `/api/v1${path}${q}`,

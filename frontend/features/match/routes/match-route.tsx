@@ -2,6 +2,7 @@ import { NominalCaution } from '../../../components/nominal-caution';
 import { ProblemMessage } from '../../../components/problem-message';
 import { useReadings } from '../api/list-readings';
 import { useRunMatch } from '../api/run-match';
+import { BatchPanel } from '../components/batch-panel';
 import { CandidateList } from '../components/candidate-list';
 import { MatchForm } from '../components/match-form';
 import { MatchPlot } from '../components/match-plot';
@@ -52,6 +53,7 @@ export function MatchRoute() {
           ) : null}
         </div>
       </div>
+      <BatchPanel />
       <NominalCaution />
     </section>
   );

@@ -1,0 +1,98 @@
+import fs from 'node:fs';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BATCH_CSV_COLUMNS } from '../../shared/match/batch-results';
+import { demo } from '../helpers/access';
+import { launchChromium, shot, startProduct, type RunningProduct } from '../helpers/product';
+
+let product: RunningProduct;
+let browser: Browser;
+let page: Page;
+const pageErrors: string[] = [];
+
+beforeAll(async () => {
+  browser = await launchChromium();
+  product = await startProduct();
+  page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
+  page.on('pageerror', (e) => pageErrors.push(e.message));
+  const { email, password } = demo('integrator');
+  await page.goto(`${product.url}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('heading', { name: 'Access', level: 1 }).waitFor();
+}, 180_000);
+
+afterAll(async () => {
+  await browser?.close();
+  await product?.stop();
+});
+
+/** The demo recycler's invented readings, with one bad row (row 3: no number). */
+const FILE = [
+  'id,conductivity (%IACS),temperature (C),density (g/cm3),frequency (kHz)',
+  'R-102 brass fitting,25.6,27,8.49,60',
+  'R-1xx smudged,abc,27,8.49,60',
+  'R-103 copper nugget,97.8,27,8.90,60',
+  '',
+].join('\r\n');
+
+describe('Match: many readings, as an integrator uses it in Chromium', () => {
+  it('uploads a file with a bad row, shows the row by number, and downloads the results', async () => {
+    await page.goto(`${product.url}/match`);
+    const panel = page.getByRole('region', { name: 'Many readings' });
+    await panel.getByRole('link', { name: 'template (CSV)' }).waitFor();
+    await panel
+      .getByLabel('CSV file of readings')
+      .setInputFiles({ name: 'line-7.csv', mimeType: 'text/csv', buffer: Buffer.from(FILE) });
+    // By keyboard: from the file field to the button, and Enter.
+    await panel.getByLabel('CSV file of readings').focus();
+    await page.keyboard.press('Tab');
+    expect(
+      await panel
+        .getByRole('button', { name: 'Match the file' })
+        .evaluate((b) => b === document.activeElement),
+    ).toBe(true);
+    await page.keyboard.press('Enter');
+
+    const summary = panel.getByRole('status').filter({ hasText: 'readings from line-7.csv' });
+    await summary.waitFor({ timeout: 60_000 });
+    await expect(summary.textContent()).resolves.toMatch(
+      /3 readings from line-7\.csv: 2 with candidates, 0 with none, 1 bad row/,
+    );
+    await expect(panel.getByRole('list', { name: 'Bad rows' }).textContent()).resolves.toMatch(
+      /Row 3 \(R-1xx smudged\): conductivity 'abc' is not a number/,
+    );
+    const table = panel.getByRole('table', { name: /Batch results/ });
+    await expect(table.getByRole('row').nth(2).textContent()).resolves.toMatch(
+      /^3R-1xx smudgedBad row: conductivity 'abc' is not a number$/,
+    );
+    await page.screenshot({ path: shot('e2e-match-batch'), fullPage: true });
+
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      panel.getByRole('button', { name: 'Download the results (CSV)' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toBe('line-7-matched.csv');
+    const csv = fs.readFileSync((await download.path())!, 'utf8').split('\r\n');
+    expect(csv[0]).toBe(BATCH_CSV_COLUMNS.join(','));
+    expect(csv[1]).toMatch(/^2,R-102 brass fitting,matched,,/);
+    expect(csv[2]).toMatch(/^3,R-1xx smudged,error,conductivity 'abc' is not a number,/);
+    expect(csv[3]).toMatch(/^4,R-103 copper nugget,matched,,/);
+    expect(pageErrors).toEqual([]);
+  }, 120_000);
+
+  it('a file the service refuses says why', async () => {
+    await page.goto(`${product.url}/match`);
+    const panel = page.getByRole('region', { name: 'Many readings' });
+    await panel.getByLabel('CSV file of readings').setInputFiles({
+      name: 'wrong.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from('id,colour\r\nx,red\r\n'),
+    });
+    await panel.getByRole('button', { name: 'Match the file' }).click();
+    await expect(panel.getByRole('alert').textContent({ timeout: 30_000 })).resolves.toMatch(
+      /Unknown column\(s\): "colour"/,
+    );
+  }, 60_000);
+});
