@@ -276,6 +276,25 @@ function blankFilaments(slices: Slice[], radiusM: number, radial: number): Blank
 const metres = (m: number) => `${Number(m.toPrecision(3))} m`;
 
 /**
+ * Damping ratio above which the discharge is refused: ζ = (R/2)·√(C/L). Far past critical damping
+ * (ζ = 1) the bank leaks away through the resistance over ~RC while the circuit's own time is
+ * L/R, 4ζ² times shorter: at ζ = 100 that is 40,000 times, which an explicit integrator cannot
+ * bridge (it ran away to 1e215 J from a 4 J bank on a 1 µm wire of a resistive alloy), and the
+ * blank would not move anyway: the peak current is about V/R.
+ */
+export const MAX_DAMPING_RATIO = 100;
+
+function requireDischarge(r: number, windingOhm: number, l: number, c: number): void {
+  const zeta = (r / 2) * Math.sqrt(c / l);
+  if (zeta <= MAX_DAMPING_RATIO) return;
+  const field = windingOhm > r / 2 ? '/body/coil' : '/body/bank/seriesResistance';
+  throw new OutsideModelError(
+    field,
+    `the circuit's resistance (${Number(r.toPrecision(3))} Ω${windingOhm > r / 2 ? `, ${Number(windingOhm.toPrecision(3))} Ω of it in the winding` : ''}) is ${Number((zeta / MAX_DAMPING_RATIO).toPrecision(2))} × too high for a pulse: the bank would leak away through it (damping ratio ${Number(zeta.toPrecision(3))}, above ${MAX_DAMPING_RATIO}) and the blank would not move. Use thicker wire, a better conductor or less series resistance.`,
+  );
+}
+
+/**
  * The thin-ring formula L = µ0·a·(ln(8a/g) − 2) holds for a cross-section small against its
  * ring, and turns negative once g > 8a/e²: a filament that fat is outside the filament model.
  * Left unchecked, a negative self-inductance lets the circuit make energy (a 5 mm aluminium slug
@@ -456,6 +475,7 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
     : selfInductanceFromFilaments(coilCells);
   const windingOhm = windingResistance(coil, coil.wireDiameterM, coil.conductorSPerM);
   const r1 = bank.seriesResistanceOhm + windingOhm;
+  requireDischarge(r1, windingOhm, l1, bank.capacitanceF);
   const pulseHz = 1 / (2 * Math.PI * Math.sqrt(l1 * bank.capacitanceF));
   const slices = blankSlices(
     blank,
@@ -705,6 +725,17 @@ export function simulateLaunch(input: LaunchInput): LaunchResult {
   const { heightM, rangeM } = ballistics(y[is]!, speed, theta);
   // The coil-side loss is ∫r1·i1²dt with r1 constant: the let-through integral follows exactly.
   const i2tA2s = coilLoss / r1;
+  // Deny by default: an answer whose ledger is not finite is not an answer (a stiff circuit the
+  // checks above let through would otherwise reach the client as NaN or 1e215 J).
+  const ledger = [coilLoss, blankLoss, kinetic, residual, speed, heightM];
+  if (
+    !ledger.every(Number.isFinite) ||
+    Math.abs(stored - coilLoss - blankLoss - kinetic - residual) > stored
+  )
+    throw new OutsideModelError(
+      '/body',
+      'the simulation did not settle to a finite answer for this circuit: check the bank, the wire and the blank against what can be built',
+    );
   const warnings = launchWarnings({
     bank,
     switchRating: input.switchRating,

@@ -187,3 +187,34 @@ describe('the linear temperature law holds from −50 °C to 200 °C', () => {
     expect(withinLinearLawRange(NaN)).toBe(false);
   });
 });
+
+describe('a discharge so damped that it is no pulse', () => {
+  it('refuses a 1 µm winding of a resistive alloy with a 422 naming the coil (fuzz seed 1614252340 ran away to 1e215 J)', () => {
+    expect(() =>
+      simulateLaunch({
+        bank: { capacitanceF: 50e-6, voltageV: 400, seriesResistanceOhm: 0.05 },
+        coil: {
+          innerRadiusM: 5e-3,
+          outerRadiusM: 12e-3,
+          lengthM: 10e-3,
+          turns: 100,
+          wireDiameterM: 1e-6,
+          conductorSPerM: 1 / 594e6,
+        },
+        blank: {
+          diameterM: 23e-3,
+          layers: [
+            {
+              thicknessM: 1.75e-3,
+              conductivitySPerM: 3.2e7,
+              relativePermeability: 1,
+              densityKgPerM3: 8860,
+            },
+          ],
+        },
+        gapM: 0.5e-3,
+        launchAngleDeg: 90,
+      }),
+    ).toThrow(expect.objectContaining({ field: '/body/coil' }));
+  });
+});
