@@ -189,7 +189,7 @@ export function createApp(options: AppOptions): Express {
     }),
   );
   v1.use(matchRouter(catalogue));
-  v1.use(matchBatchRouter(catalogue));
+  v1.use(matchBatchRouter(catalogue, createSortPlanRepository(knex)));
   v1.use(readingsRouter(createReadingRepository(knex)));
   const stacks = createStackRepository(knex);
   const estimatePool = options.estimatePool ?? createEstimatePool();

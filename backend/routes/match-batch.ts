@@ -3,6 +3,7 @@ import { Router, type Request, type RequestHandler, type Response } from 'expres
 import multer, { type StorageEngine } from 'multer';
 import { ProblemError } from '../http/problem';
 import { uploadErrors } from '../http/upload-errors';
+import type { SortPlanRepository } from '../db/sort-plan-repository';
 import type { CatalogueStore } from '../services/catalogue-store';
 import {
   batchAnswer,
@@ -10,6 +11,7 @@ import {
   readBatch,
   type BatchReadings,
 } from '../services/match-batch';
+import { batchPlanAnswer, planWindowsOf, type PlanWindows } from '../services/match-batch-plan';
 
 /** The template a person downloads and fills in: the demo recycler's readings (invented). */
 export const BATCH_TEMPLATE = [
@@ -64,6 +66,7 @@ const FORMATS = { 'text/csv': 'csv', 'application/x-ndjson': 'ndjson' } as const
 function checkRequest(req: Request): {
   format: 'csv' | 'ndjson';
   kind: 'csv' | 'multipart';
+  plan: number | null;
 } {
   const unknown = Object.keys(req.query).filter((k) => k !== 'plan');
   if (unknown.length)
@@ -79,13 +82,6 @@ function checkRequest(req: Request): {
       throw new ProblemError(400, 'Bad request', 'plan is the id of a saved sort plan', [
         { path: '/query/plan', message: 'a positive integer' },
       ]);
-    // The extension point for saved sort plans: classify by the plan's windows instead.
-    throw new ProblemError(
-      422,
-      'Unprocessable content',
-      'Saved plans are not available yet: leave out plan to rank the alloys of the table.',
-      [{ path: '/query/plan', message: 'saved plans are not available yet' }],
-    );
   }
   const accepted = req.accepts(Object.keys(FORMATS));
   if (!accepted)
@@ -121,10 +117,16 @@ function checkRequest(req: Request): {
       'Request body too large',
       `A batch file may be at most ${MAX_BATCH_BYTES / 1024 / 1024} MiB. Send it in parts.`,
     );
-  return { format: FORMATS[accepted as keyof typeof FORMATS], kind };
+  const plan = req.query.plan === undefined ? null : Number(req.query.plan);
+  return { format: FORMATS[accepted as keyof typeof FORMATS], kind, plan };
 }
 
-export function matchBatchRouter(catalogue: CatalogueStore): Router {
+type Checked = ReturnType<typeof checkRequest> & {
+  windows?: PlanWindows;
+  release?: { version: string; checksum: string };
+};
+
+export function matchBatchRouter(catalogue: CatalogueStore, plans: SortPlanRepository): Router {
   const router = Router({ caseSensitive: true, strict: true });
   let running = 0;
 
@@ -136,9 +138,21 @@ export function matchBatchRouter(catalogue: CatalogueStore): Router {
   });
 
   /** Holds one of the batch slots from here until the response has ended either way. */
-  const slot: RequestHandler = (req, res, next) => {
-    const checked = checkRequest(req);
+  const slot: RequestHandler = async (req, res, next) => {
+    const checked: Checked = checkRequest(req);
     res.locals.batch = checked;
+    if (checked.plan !== null) {
+      // Someone else's plan is as absent as a missing one (findOwned), as on /sort-plans/{id};
+      // looked up before the body is read, so a wrong id costs no upload.
+      const ownerId = 'userId' in req.principal ? req.principal.userId : null;
+      const row = ownerId === null ? undefined : await plans.findOwned(checked.plan, ownerId);
+      if (!row)
+        throw new ProblemError(404, 'Not found', `No sort plan ${checked.plan} of yours`, [
+          { path: '/query/plan', message: 'no such saved plan of yours' },
+        ]);
+      checked.windows = planWindowsOf(row);
+      checked.release = row.release;
+    }
     if (running >= MAX_CONCURRENT_BATCHES)
       throw new ProblemError(
         503,
@@ -165,7 +179,7 @@ export function matchBatchRouter(catalogue: CatalogueStore): Router {
   };
 
   const multipartOnly: RequestHandler = (req, res, next) =>
-    (res.locals.batch as ReturnType<typeof checkRequest>).kind === 'multipart'
+    (res.locals.batch as Checked).kind === 'multipart'
       ? upload.single('file')(req, res, next)
       : next();
 
@@ -183,8 +197,8 @@ export function matchBatchRouter(catalogue: CatalogueStore): Router {
         throw new ProblemError(400, 'Bad request', "Send the file as the multipart field 'file'.", [
           { path: '/body/file', message: 'a file is required' },
         ]);
-      const { format } = res.locals.batch as ReturnType<typeof checkRequest>;
-      const table = await catalogue.get();
+      const { format, windows, release } = res.locals.batch as Checked;
+      const table = windows ? null : await catalogue.get();
       res.status(200);
       res.setHeader(
         'Content-Type',
@@ -193,10 +207,22 @@ export function matchBatchRouter(catalogue: CatalogueStore): Router {
       res.setHeader('Cache-Control', 'no-store');
       res.setHeader('X-Batch-Rows', String(batch.count));
       res.setHeader('X-Batch-Errors', String(batch.errors.size));
+      if (release) {
+        res.setHeader('X-Plan-Release', release.version);
+        res.setHeader('X-Plan-Release-Checksum', release.checksum);
+      }
       if (format === 'csv')
-        res.setHeader('Content-Disposition', 'attachment; filename="conductory-match-results.csv"');
+        res.setHeader(
+          'Content-Disposition',
+          `attachment; filename="conductory-${windows ? 'sort' : 'match'}-results.csv"`,
+        );
       try {
-        await pipeline(batchAnswer(batch, table.all(), format), res);
+        await pipeline(
+          windows
+            ? batchPlanAnswer(batch, windows, format)
+            : batchAnswer(batch, table!.all(), format),
+          res,
+        );
       } catch (error) {
         // The client going away mid-answer is no fault; anything else is, though the status has
         // gone: the answer ends short of X-Batch-Rows lines, which is how a client can tell.

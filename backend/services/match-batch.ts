@@ -569,8 +569,23 @@ export function batchAnswer(
   format: 'csv' | 'ndjson',
 ): Readable {
   const rank = createBatchMatcher(alloys);
+  return streamBatchLines(batch.count, format === 'csv' ? batchCsvHeader() : '', (i) => {
+    const line = batchLine(batch, i, rank);
+    return format === 'csv' ? batchCsvRecord(line) : `${JSON.stringify(line)}\n`;
+  });
+}
+
+/**
+ * The lines of an answer as a byte stream: `header`, then `record(i)` for each reading, a slice
+ * of ROWS_PER_SLICE at a time after a turn of the event loop, and only when the reader has room.
+ */
+export function streamBatchLines(
+  count: number,
+  header: string,
+  record: (i: number) => string,
+): Readable {
   let next = 0;
-  let headerSent = format !== 'csv';
+  let headerSent = header === '';
   let timer: NodeJS.Immediate | undefined;
   return new Readable({
     read() {
@@ -578,20 +593,17 @@ export function batchAnswer(
         let text = '';
         try {
           if (!headerSent) {
-            text += batchCsvHeader();
+            text += header;
             headerSent = true;
           }
-          const end = Math.min(next + ROWS_PER_SLICE, batch.count);
-          for (; next < end; next++) {
-            const line = batchLine(batch, next, rank);
-            text += format === 'csv' ? batchCsvRecord(line) : `${JSON.stringify(line)}\n`;
-          }
+          const end = Math.min(next + ROWS_PER_SLICE, count);
+          for (; next < end; next++) text += record(next);
         } catch (error) {
           // Outside any request handler here: a fault ends this answer, never the process.
           return this.destroy(error as Error);
         }
         if (text) this.push(text);
-        if (next >= batch.count) this.push(null);
+        if (next >= count) this.push(null);
       });
     },
     destroy(error, callback) {

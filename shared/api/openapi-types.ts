@@ -1122,6 +1122,43 @@ export interface components {
             status: "error";
             error: string;
         };
+        /** @description One line of NDJSON per reading when the batch is classified by a saved sort plan; a bad row has status error and its reason, as in BatchLine. */
+        BatchPlanLine: {
+            /** @description The line of the file (the header is line 1). */
+            row: number;
+            id: string | null;
+            /**
+             * @description product: one window holds the reading; none: no window does; ambiguous: several do.
+             * @enum {string}
+             */
+            status: "product" | "none" | "ambiguous";
+            reading: {
+                conductivitySPerM: number;
+                temperatureK: number;
+                densityKgPerM3: number | null;
+                frequencyHz: number | null;
+                uncertaintyPercent: number;
+            };
+            /** @description The plan's frequency whose windows classified the reading. */
+            planFrequencyHz: number;
+            /**
+             * @description reading: the plan's frequency nearest the reading's own (log terms); recommended: the reading gives none, so the plan's recommended one; lowest: the reading gives none and the plan recommends none (a one-product plan).
+             * @enum {string}
+             */
+            frequencyFrom: "reading" | "recommended" | "lowest";
+            /** @description The product whose window holds the reading (status product only). */
+            product: string | null;
+            /** @description Every product whose window holds the reading, in the plan's order. */
+            products: string[];
+            /** @description Remarks that do not stop the classification (a temperature outside the plan's range). */
+            notes: string[];
+        } | {
+            row: number;
+            id: string | null;
+            /** @enum {string} */
+            status: "error";
+            error: string;
+        };
         MatchCandidate: {
             slug: string;
             name: string;
@@ -1863,7 +1900,7 @@ export interface operations {
     matchBatch: {
         parameters: {
             query?: {
-                /** @description The id of a saved sort plan, to classify each reading by the plan's windows instead of ranking the table. Saved plans are not available yet: a plan is refused (422). */
+                /** @description The id of one of your saved sort plans (GET /sort-plans), to classify each reading by the plan's windows instead of ranking the table. Another person's plan, or a missing one, is 404. Per reading, the plan's frequency nearest the reading's `frequency` in log terms is used (or, with no frequency in the row, the plan's recommended one, or its lowest when it recommends none); the reading is compared with each product's window there (lowSPerM..highSPerM, which already span the plan's temperature range): one window holds it → `product`; none → `none`; several → `ambiguous`, naming them. A reading whose temperature is outside the plan's range gets a note, not an error. The lines are then `BatchPlanLine` (NDJSON), or the CSV columns row, id, status (product, none, ambiguous, error), error, conductivity_s_per_m, conductivity_percent_iacs, temperature_k, density_kg_per_m3, frequency_hz, plan_frequency_hz, frequency_from (reading, recommended, lowest), product, products and notes (each joined with "; "). */
                 plan?: number;
             };
             header?: never;
@@ -1887,11 +1924,15 @@ export interface operations {
                     "X-Batch-Rows"?: number;
                     /** @description How many of them are bad rows. */
                     "X-Batch-Errors"?: number;
+                    /** @description With `plan`: the table release the plan was evaluated against ("unreleased" when it came from the live table). */
+                    "X-Plan-Release"?: string;
+                    /** @description With `plan`: that release's SHA-256 checksum. */
+                    "X-Plan-Release-Checksum"?: string;
                     [name: string]: unknown;
                 };
                 content: {
                     "text/csv": string;
-                    "application/x-ndjson": components["schemas"]["BatchLine"];
+                    "application/x-ndjson": components["schemas"]["BatchLine"] | components["schemas"]["BatchPlanLine"];
                 };
             };
             default: components["responses"]["Problem"];

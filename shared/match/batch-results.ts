@@ -96,3 +96,82 @@ export function batchCsvRecord(line: BatchLine): string {
   }
   return `${cells.map(csvCell).join(',')}\r\n`;
 }
+
+/**
+ * Where the frequency a reading was classified at came from: the plan's frequency nearest the
+ * reading's own (in log terms), the plan's recommended one (the reading gives none), or the
+ * plan's lowest (the reading gives none and the plan recommends none: a one-product plan).
+ */
+export type PlanFrequencySource = 'reading' | 'recommended' | 'lowest';
+
+/**
+ * One line of an answer classified by a saved sort plan. `product`: the one window holding the
+ * reading; `none`: no window holds it; `ambiguous`: several do (`products` names them all, in
+ * the plan's order). `notes` are per-row remarks that do not stop the classification (a
+ * temperature outside the plan's range).
+ */
+export type BatchPlanLine =
+  | {
+      row: number;
+      id: string | null;
+      status: 'product' | 'none' | 'ambiguous';
+      reading: BatchReading;
+      planFrequencyHz: number;
+      frequencyFrom: PlanFrequencySource;
+      product: string | null;
+      products: string[];
+      notes: string[];
+    }
+  | { row: number; id: string | null; status: 'error'; error: string };
+
+export const BATCH_PLAN_CSV_COLUMNS: readonly string[] = [
+  'row',
+  'id',
+  'status',
+  'error',
+  'conductivity_s_per_m',
+  'conductivity_percent_iacs',
+  'temperature_k',
+  'density_kg_per_m3',
+  'frequency_hz',
+  'plan_frequency_hz',
+  'frequency_from',
+  'product',
+  'products',
+  'notes',
+];
+
+/** The header line of a plan-classified answer, CRLF-terminated. */
+export function batchPlanCsvHeader(): string {
+  return `${BATCH_PLAN_CSV_COLUMNS.join(',')}\r\n`;
+}
+
+/**
+ * One plan-classified line as a CSV record, CRLF-terminated. `products` and `notes` join their
+ * items with "; " (product names are the plan author's own text, so a name holding "; " reads
+ * ambiguously there: the NDJSON answer keeps them apart).
+ */
+export function batchPlanCsvRecord(line: BatchPlanLine): string {
+  const cells: Array<string | number | null> = [line.row, line.id, line.status];
+  if (line.status === 'error') cells.push(line.error, ...Array<null>(10).fill(null));
+  else {
+    const r = line.reading;
+    cells.push(
+      null,
+      r.conductivitySPerM,
+      iacs(r.conductivitySPerM),
+      r.temperatureK,
+      r.densityKgPerM3,
+      r.frequencyHz,
+      line.planFrequencyHz,
+      line.frequencyFrom,
+      line.product,
+      line.products.join('; '),
+      line.notes.join('; '),
+    );
+  }
+  return `${cells.map(csvCell).join(',')}\r\n`;
+}
+
+/** A plan-classified line that is a reading's classification, not a bad row. */
+export type BatchPlanClassified = Exclude<BatchPlanLine, { status: 'error' }>;

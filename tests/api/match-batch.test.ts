@@ -255,12 +255,12 @@ describe('POST /api/v1/match/batch', () => {
       expectProblem(json, 415, /text\/csv body/);
       expectProblem(await postCsv(`${HEADER}\r\nx,28,20,,\r\n`, 'application/json'), 406, /Accept/);
     });
-    it('a saved plan (not available yet: 422) and unknown parameters (400)', async () => {
+    it('a missing saved plan (404; tests/api/match-batch-plan.test.ts has the rest) and unknown parameters (400)', async () => {
       const plan = await integrator
-        .post(`${URL}?plan=3`)
+        .post(`${URL}?plan=999999`)
         .set('Content-Type', 'text/csv')
         .send(`${HEADER}\r\nx,28,20,,\r\n`);
-      expectProblem(plan, 422, /Saved plans are not available yet/);
+      expectProblem(plan, 404, /No sort plan 999999 of yours/);
       const other = await integrator
         .post(`${URL}?limit=3`)
         .set('Content-Type', 'text/csv')

@@ -17,6 +17,14 @@ export interface BatchAnswer {
   rows: number;
   errors: number;
   fileName: string;
+  /** The saved plan the readings were classified by (lines are then BatchPlanLine), or null. */
+  plan: { id: number; name: string; release: { version: string; checksum: string } } | null;
+}
+
+/** A saved plan to classify by instead of ranking the table. */
+export interface BatchPlanChoice {
+  id: number;
+  name: string;
 }
 
 /**
@@ -28,12 +36,13 @@ export interface BatchAnswer {
 export function runBatch(
   file: File,
   onProgress: (progress: BatchProgress) => void,
+  plan: BatchPlanChoice | null = null,
 ): Promise<BatchAnswer> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     const progress: BatchProgress = { uploaded: 0, rows: null, received: 0 };
     let counted = 0;
-    xhr.open('POST', '/api/v1/match/batch');
+    xhr.open('POST', plan ? `/api/v1/match/batch?plan=${plan.id}` : '/api/v1/match/batch');
     xhr.setRequestHeader('Accept', 'application/x-ndjson');
     xhr.upload.onprogress = (e) => {
       if (!e.lengthComputable) return;
@@ -74,6 +83,13 @@ export function runBatch(
           rows,
           errors: Number(xhr.getResponseHeader('X-Batch-Errors')),
           fileName: file.name,
+          plan: plan && {
+            ...plan,
+            release: {
+              version: xhr.getResponseHeader('X-Plan-Release') ?? '',
+              checksum: xhr.getResponseHeader('X-Plan-Release-Checksum') ?? '',
+            },
+          },
         });
       }
       if (xhr.status === 401) unauthorized.dispatchEvent(new Event('401'));
@@ -104,5 +120,8 @@ export function runBatch(
 
 /** A batch is a computation, not a stored thing: a mutation, run afresh on each upload. */
 export function useRunBatch(onProgress: (progress: BatchProgress) => void) {
-  return useMutation({ mutationFn: (file: File) => runBatch(file, onProgress) });
+  return useMutation({
+    mutationFn: ({ file, plan }: { file: File; plan: BatchPlanChoice | null }) =>
+      runBatch(file, onProgress, plan),
+  });
 }

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Link, useLocation } from 'react-router-dom';
 import { ProblemMessage } from '../../../components/problem-message';
 import { signInPath, useMe } from '../../../lib/session';
+import { useSortPlans } from '../api/list-sort-plans';
 import { useRunBatch, type BatchProgress } from '../api/run-batch';
 import { BatchResults } from './batch-results';
 
@@ -55,6 +56,10 @@ export function BatchPanel() {
   const batch = useRunBatch(setProgress);
   const role = me.data?.role;
   const allowed = role !== undefined && BATCH_ROLES.includes(role);
+  const plans = useSortPlans(allowed);
+  /** The saved plan's id as the select holds it; '' ranks the table. */
+  const [planId, setPlanId] = useState('');
+  const plan = plans.data?.items.find((p) => String(p.id) === planId) ?? null;
 
   return (
     <section
@@ -100,9 +105,40 @@ export function BatchPanel() {
             e.preventDefault();
             if (!file || batch.isPending) return;
             setProgress({ uploaded: 0, rows: null, received: 0 });
-            batch.mutate(file, { onSettled: () => setProgress(null) });
+            batch.mutate(
+              { file, plan: plan && { id: plan.id, name: plan.name } },
+              { onSettled: () => setProgress(null) },
+            );
           }}
         >
+          <label className="flex flex-col gap-1 text-sm">
+            <span className="font-medium">Sort by a saved plan (optional)</span>
+            <select
+              className="max-w-full rounded border border-patina-300 px-2 py-1.5 sm:max-w-md"
+              value={planId}
+              onChange={(e) => (setPlanId(e.target.value), batch.reset())}
+            >
+              <option value="">No plan: the three best alloys of the table</option>
+              {plans.data?.items.map((p) => (
+                <option key={p.id} value={String(p.id)}>
+                  {p.name} (table {p.release.version})
+                </option>
+              ))}
+            </select>
+            <span className="text-ink/70">
+              {plans.data && plans.data.items.length === 0 ? (
+                <>
+                  You have no saved plans yet: save one in the{' '}
+                  <Link className="text-patina-700 underline" to="/sort-planner">
+                    Sort Planner
+                  </Link>
+                  .
+                </>
+              ) : (
+                "With a plan, each reading gets the plan's product whose window holds it, at the plan's frequency nearest the reading's own (or its recommended one): a product, none or ambiguous."
+              )}
+            </span>
+          </label>
           <label className="flex flex-col gap-1 text-sm">
             <span className="font-medium">CSV file of readings</span>
             <input
@@ -118,7 +154,7 @@ export function BatchPanel() {
               className="rounded bg-copper-500 px-3 py-1.5 text-white disabled:opacity-40"
               disabled={!file || batch.isPending}
             >
-              Match the file
+              {plan ? 'Sort the file' : 'Match the file'}
             </button>
           </div>
           {progress ? <Progress progress={progress} /> : null}

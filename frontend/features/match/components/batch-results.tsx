@@ -3,8 +3,12 @@ import { Link } from 'react-router-dom';
 import {
   batchCsvHeader,
   batchCsvRecord,
+  batchPlanCsvHeader,
+  batchPlanCsvRecord,
   type BatchCandidate,
   type BatchLine,
+  type BatchPlanClassified,
+  type BatchPlanLine,
 } from '../../../../shared/match/batch-results';
 import { DataTable } from '../../../components/data-table';
 import { UnitSwitcher } from '../../../components/unit-switcher';
@@ -12,6 +16,7 @@ import {
   conductivityQuantityName,
   formatConductivity,
   formatDensity,
+  formatFrequency,
   formatNumber,
 } from '../../../lib/format';
 import { useUnitPreferences } from '../../../lib/unit-preferences';
@@ -22,17 +27,22 @@ const PAGE_SIZE = 25;
 const isErrorLine = (line: string) => line.includes('"status":"error"');
 
 /** The answer as the CSV the API gives for Accept: text/csv, built from the NDJSON received. */
-function resultsCsv(lines: string[]): Blob {
-  const parts = [batchCsvHeader()];
-  for (const line of lines) parts.push(batchCsvRecord(JSON.parse(line) as BatchLine));
+function resultsCsv(answer: BatchAnswer): Blob {
+  const parts = [answer.plan ? batchPlanCsvHeader() : batchCsvHeader()];
+  for (const line of answer.lines)
+    parts.push(
+      answer.plan
+        ? batchPlanCsvRecord(JSON.parse(line) as BatchPlanLine)
+        : batchCsvRecord(JSON.parse(line) as BatchLine),
+    );
   return new Blob(parts, { type: 'text/csv;charset=utf-8' });
 }
 
 function download(answer: BatchAnswer) {
-  const url = URL.createObjectURL(resultsCsv(answer.lines));
+  const url = URL.createObjectURL(resultsCsv(answer));
   const a = document.createElement('a');
   a.href = url;
-  a.download = `${answer.fileName.replace(/\.[^.]*$/, '') || 'readings'}-matched.csv`;
+  a.download = `${answer.fileName.replace(/\.[^.]*$/, '') || 'readings'}-${answer.plan ? 'sorted' : 'matched'}.csv`;
   document.body.append(a);
   a.click();
   a.remove();
@@ -49,6 +59,13 @@ function Candidate({ c }: { c: BatchCandidate | undefined }) {
       <span className="text-ink/70 tabular-nums">fit {formatNumber(c.score, 2)}</span>
     </span>
   );
+}
+
+/** How a plan sorted a reading, in words for the table. */
+function Sorted({ l }: { l: BatchPlanClassified }) {
+  if (l.status === 'product') return <span className="font-medium">{l.product}</span>;
+  if (l.status === 'none') return <span className="text-ink/70">none: no window holds it</span>;
+  return <span>ambiguous: {l.products.join(', ')}</span>;
 }
 
 /** The matched readings a page at a time, the bad rows by row number, and the download. */
@@ -68,9 +85,12 @@ export function BatchResults({ answer }: { answer: BatchAnswer }) {
     const indices = onlyBad
       ? badIndices.slice(from, from + PAGE_SIZE)
       : Array.from({ length: Math.min(PAGE_SIZE, answer.lines.length - from) }, (_, k) => from + k);
-    return indices.map((i) => JSON.parse(answer.lines[i]!) as BatchLine);
+    return indices.map((i) => JSON.parse(answer.lines[i]!) as BatchLine | BatchPlanLine);
   }, [answer.lines, badIndices, onlyBad, current]);
   const none = answer.lines.filter((l) => l.includes('"status":"none"')).length;
+  const ambiguous = answer.plan
+    ? answer.lines.filter((l) => l.includes('"status":"ambiguous"')).length
+    : 0;
   const quantity = conductivityQuantityName(units.conductivity);
   const firstBad = badIndices
     .slice(0, 10)
@@ -80,10 +100,22 @@ export function BatchResults({ answer }: { answer: BatchAnswer }) {
     <div className="flex flex-col gap-3">
       <div role="status" className="flex flex-col gap-1 rounded-md bg-patina-50 p-3 text-sm">
         <p className="font-medium">
-          {answer.rows.toLocaleString('en-US')} readings from {answer.fileName}:{' '}
-          {(answer.rows - answer.errors - none).toLocaleString('en-US')} with candidates,{' '}
-          {none.toLocaleString('en-US')} with none, {answer.errors.toLocaleString('en-US')} bad{' '}
-          {answer.errors === 1 ? 'row' : 'rows'}.
+          {answer.rows.toLocaleString('en-US')} readings from {answer.fileName}
+          {answer.plan ? (
+            <>
+              {' '}
+              sorted by the plan {answer.plan.name} (table {answer.plan.release.version}):{' '}
+              {(answer.rows - answer.errors - none - ambiguous).toLocaleString('en-US')} to a
+              product, {none.toLocaleString('en-US')} to none, {ambiguous.toLocaleString('en-US')}{' '}
+              ambiguous,{' '}
+            </>
+          ) : (
+            <>
+              : {(answer.rows - answer.errors - none).toLocaleString('en-US')} with candidates,{' '}
+              {none.toLocaleString('en-US')} with none,{' '}
+            </>
+          )}
+          {answer.errors.toLocaleString('en-US')} bad {answer.errors === 1 ? 'row' : 'rows'}.
         </p>
         {firstBad.length ? (
           <ul aria-label="Bad rows" className="list-disc pl-5">
@@ -119,17 +151,46 @@ export function BatchResults({ answer }: { answer: BatchAnswer }) {
       </div>
       <DataTable
         caption={`Batch results, page ${current + 1} of ${pages}`}
-        headers={['Row', 'Id', quantity, 'Temperature', 'Density', 'Best', 'Second', 'Third']}
-        minWidth="56rem"
+        headers={
+          answer.plan
+            ? ['Row', 'Id', quantity, 'Temperature', 'Frequency used', 'Sorted as', 'Notes']
+            : ['Row', 'Id', quantity, 'Temperature', 'Density', 'Best', 'Second', 'Third']
+        }
+        minWidth={answer.plan ? '48rem' : '56rem'}
       >
         {slice.map((l) =>
           l.status === 'error' ? (
             <tr key={l.row} className="border-t border-patina-100 bg-red-50">
               <td className="px-3 py-2 tabular-nums">{l.row}</td>
               <td className="px-3 py-2">{l.id ?? '—'}</td>
-              <td colSpan={6} className="px-3 py-2">
+              <td colSpan={answer.plan ? 5 : 6} className="px-3 py-2">
                 Bad row: {l.error}
               </td>
+            </tr>
+          ) : 'planFrequencyHz' in l ? (
+            <tr key={l.row} className="border-t border-patina-100">
+              <td className="px-3 py-2 tabular-nums">{l.row}</td>
+              <td className="px-3 py-2">{l.id ?? '—'}</td>
+              <td className="px-3 py-2 tabular-nums">
+                {formatConductivity(l.reading.conductivitySPerM, units.conductivity)}
+              </td>
+              <td className="px-3 py-2 tabular-nums">
+                {formatNumber(l.reading.temperatureK - 273.15)} °C
+              </td>
+              <td className="px-3 py-2 tabular-nums">
+                {formatFrequency(l.planFrequencyHz)}{' '}
+                <span className="text-ink/70">
+                  {l.frequencyFrom === 'reading'
+                    ? '(nearest the reading’s)'
+                    : l.frequencyFrom === 'recommended'
+                      ? '(recommended; the reading has none)'
+                      : '(the plan’s lowest; the reading has none)'}
+                </span>
+              </td>
+              <td className="px-3 py-2">
+                <Sorted l={l} />
+              </td>
+              <td className="px-3 py-2 text-ink/70">{l.notes.join('; ') || '—'}</td>
             </tr>
           ) : (
             <tr key={l.row} className="border-t border-patina-100">
