@@ -46,3 +46,30 @@ export function domainIncluding(
   hi = hi + span * pad;
   return [lo, hi > 0 ? niceAbove(hi) : hi];
 }
+
+/**
+ * A linear axis with round ends and round ticks (about `count` of them, steps of 1, 2, 2.5 or 5 ×
+ * 10ⁿ) that holds every value: the Sort Planner's planes read 0.03, 0.06, 0.09, not 0.0291, 0.0641.
+ */
+export function niceLinearAxis(
+  values: number[],
+  count = 5,
+): { domain: [number, number]; ticks: number[] } {
+  const finite = values.filter((v) => Number.isFinite(v));
+  if (!finite.length) return { domain: [0, 1], ticks: [0, 0.5, 1] };
+  let lo = Math.min(...finite);
+  let hi = Math.max(...finite);
+  if (hi === lo) {
+    const half = Math.abs(hi) * 0.05 || 0.5;
+    lo -= half;
+    hi += half;
+  }
+  const rough = (hi - lo) / count;
+  const power = 10 ** Math.floor(Math.log10(rough));
+  const step = ([1, 2, 2.5, 5, 10].find((m) => m * power >= rough) ?? 10) * power;
+  const start = Math.floor(lo / step) * step;
+  const end = Math.ceil(hi / step) * step;
+  const ticks: number[] = [];
+  for (let t = start; t <= end + step * 1e-9; t += step) ticks.push(Number(t.toPrecision(12)));
+  return { domain: [ticks[0]!, ticks.at(-1)!], ticks };
+}

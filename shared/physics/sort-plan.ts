@@ -340,6 +340,12 @@ function varyingParameters(model: ProductModel, input: PlanInput): Parameter[] {
   return params;
 }
 
+/** A frequency for a sentence: 10 kHz, 1.58 MHz, 630 Hz (four significant figures at most). */
+function hertzText(hz: number): string {
+  const [scale, unit] = hz >= 1e6 ? [1e6, 'MHz'] : hz >= 1e3 ? [1e3, 'kHz'] : [1, 'Hz'];
+  return `${Number((hz / scale).toPrecision(4))} ${unit}`;
+}
+
 /**
  * Evaluates a sort plan (see the module's conventions above). Per frequency and product the
  * window of readings; per frequency the overlapping pairs and the separability; the frequency of
@@ -508,13 +514,13 @@ export function evaluateSortPlan(input: PlanInput, options: PlanOptions = {}): P
         ? (() => {
             const left = unseparatedByPair(frequencies, recommendedPair);
             return left.length === 0
-              ? ` The pair ${recommendedPair.map((f) => `${Number(f.toPrecision(4))} Hz`).join(' and ')} separates every product.`
-              : ` Even the pair ${recommendedPair.map((f) => `${Number(f.toPrecision(4))} Hz`).join(' and ')} leaves ${left.map(([a, b]) => `${a} / ${b}`).join(', ')} overlapping.`;
+              ? ` The pair ${recommendedPair.map(hertzText).join(' and ')} separates every product.`
+              : ` Even the pair ${recommendedPair.map(hertzText).join(' and ')} leaves ${left.map(([a, b]) => `${a} / ${b}`).join(', ')} overlapping.`;
           })()
         : '';
       warnings.push({
         code: 'inseparable',
-        message: `At the recommended ${Number(recommendedFrequencyHz.toPrecision(4))} Hz these windows still overlap: ${at.overlaps.map((o) => `${o.a} / ${o.b}`).join(', ')}.${pairText}`,
+        message: `At the recommended ${hertzText(recommendedFrequencyHz)} these windows still overlap: ${at.overlaps.map((o) => `${o.a} / ${o.b}`).join(', ')}.${pairText}`,
       });
     }
   }

@@ -10,7 +10,7 @@ import {
 } from 'recharts';
 import { unitLabel } from '../../../../shared/units/codes';
 import { FiguresTable } from '../../../components/figures-table';
-import { domainIncluding, tickNumber } from '../../../lib/chart-format';
+import { niceLinearAxis, tickNumber } from '../../../lib/chart-format';
 import { formatConductivityRange, formatFrequency, formatNumber } from '../../../lib/format';
 import type { UnitPreferences } from '../../../lib/unit-preferences';
 import type { PlanResult } from '../api/evaluate-plan';
@@ -39,8 +39,10 @@ function BoxChart({
   yLabel: string;
   boxes: Box[];
 }) {
-  const xDomain = domainIncluding(boxes.flatMap((b) => b.x));
-  const yDomain = domainIncluding(boxes.flatMap((b) => b.y));
+  const xAxis = niceLinearAxis(boxes.flatMap((b) => b.x));
+  const yAxis = niceLinearAxis(boxes.flatMap((b) => b.y));
+  const xDomain = xAxis.domain;
+  const yDomain = yAxis.domain;
   // A box of no width would vanish: give it a hair of the axis.
   const grow = ([a, b]: [number, number], [lo, hi]: [number, number]): [number, number] =>
     b - a > (hi - lo) * 0.004 ? [a, b] : [a - (hi - lo) * 0.002, b + (hi - lo) * 0.002];
@@ -83,6 +85,7 @@ function BoxChart({
               type="number"
               dataKey="x"
               domain={xDomain}
+              ticks={xAxis.ticks}
               tickFormatter={tickNumber}
               label={{ value: xLabel, position: 'insideBottom', offset: -14 }}
             />
@@ -90,6 +93,7 @@ function BoxChart({
               type="number"
               dataKey="y"
               domain={yDomain}
+              ticks={yAxis.ticks}
               tickFormatter={tickNumber}
               label={{ value: yLabel, angle: -90, position: 'insideLeft', offset: -8 }}
             />

@@ -115,7 +115,8 @@ export function WindowChart({ result, units }: { result: PlanResult; units: Unit
                   : String(v)
               }
             />
-            <Legend verticalAlign="top" />
+            {/* In the order the products were listed, as the other charts and tables give them. */}
+            <Legend verticalAlign="top" itemSorter={null} />
             {shaded.map((s, i) => (
               <ReferenceArea
                 key={`o${i}`}
@@ -143,7 +144,7 @@ export function WindowChart({ result, units }: { result: PlanResult; units: Unit
                 x={result.recommendedFrequencyHz}
                 stroke="#1f2a28"
                 strokeDasharray="5 3"
-                label={{ value: 'recommended', position: 'top' }}
+                label={{ value: 'recommended', position: 'insideTopRight' }}
               />
             ) : null}
           </ComposedChart>
