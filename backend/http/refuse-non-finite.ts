@@ -13,10 +13,17 @@ function nonFiniteText(value: string): boolean {
   return NON_FINITE_WORD.test(value) || (NUMERAL.test(value) && !Number.isFinite(Number(value)));
 }
 
+/**
+ * U+0000 in text: PostgreSQL's text type cannot hold it (the driver fails the query), SQLite would
+ * store it. Refused here, so both databases answer the same 400 and nothing stores it.
+ */
+const NUL_MESSAGE = 'must not contain the NUL character (U+0000)';
+
 /** Query values are strings, or arrays and objects of them under the extended parser. */
 function walkQuery(value: unknown, path: string, out: FieldError[]): void {
   if (typeof value === 'string') {
-    if (nonFiniteText(value))
+    if (value.includes('\u0000')) out.push({ path, message: NUL_MESSAGE });
+    else if (nonFiniteText(value))
       out.push({ path, message: `'${value.trim()}' is not a finite number` });
   } else if (Array.isArray(value)) {
     value.forEach((v, i) => walkQuery(v, `${path}/${i}`, out));
@@ -30,6 +37,8 @@ function walkBody(value: unknown, path: string, out: FieldError[], depth = 0): v
   if (out.length >= 20 || depth > 64) return;
   if (typeof value === 'number') {
     if (!Number.isFinite(value)) out.push({ path, message: 'must be a finite number' });
+  } else if (typeof value === 'string') {
+    if (value.includes('\u0000')) out.push({ path, message: NUL_MESSAGE });
   } else if (Array.isArray(value)) {
     value.forEach((v, i) => walkBody(v, `${path}/${i}`, out, depth + 1));
   } else if (value && typeof value === 'object') {
@@ -42,7 +51,8 @@ function walkBody(value: unknown, path: string, out: FieldError[], depth = 0): v
  * Refuses non-finite numbers at the edge, before the validator and any handler see them: a
  * query value such as `Infinity`, `NaN` or `1e999` (the validator coerces those to numbers that
  * pass `type: integer` or slip past a maximum), and a JSON number that overflowed to Infinity.
- * Answers 400 problem+json naming each field (/query/days, /body/conductivity/value).
+ * Answers 400 problem+json naming each field (/query/days, /body/conductivity/value). Text with
+ * a NUL character is refused the same way (see NUL_MESSAGE).
  */
 export const refuseNonFinite: RequestHandler = (req, _res, next) => {
   const errors: FieldError[] = [];

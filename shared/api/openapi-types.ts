@@ -11,7 +11,10 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Service and database status */
+        /**
+         * Service and database status
+         * @description For a load balancer's health and readiness checks: 200 only when this instance's database answers a query now; 503 (problem) when it does not, so the proxy stops sending requests here until it does.
+         */
         get: operations["getHealth"];
         put?: never;
         post?: never;
@@ -700,6 +703,11 @@ export interface components {
             /** @enum {string} */
             status: "ok";
             version: string;
+            /**
+             * @description Which database this instance serves from (it answered a query just now).
+             * @enum {string}
+             */
+            database: "sqlite" | "postgres";
             /** @description Published alloys in the table. */
             alloys: number;
         };
@@ -1228,6 +1236,7 @@ export interface components {
     parameters: {
         /** @description Read the table as this release froze it (e.g. 2026.12.0). */
         Release: string;
+        /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
         Id: number;
     };
     requestBodies: never;
@@ -1254,6 +1263,7 @@ export interface operations {
                     "application/json": components["schemas"]["Health"];
                 };
             };
+            503: components["responses"]["Problem"];
             default: components["responses"]["Problem"];
         };
     };
@@ -1740,6 +1750,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -1761,6 +1772,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -1839,6 +1851,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2069,6 +2082,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2092,6 +2106,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
