@@ -56,6 +56,31 @@ function walkBody(value: unknown, path: string, out: FieldError[], depth = 0): v
  */
 export const refuseNonFinite: RequestHandler = (req, _res, next) => {
   const errors: FieldError[] = [];
+  // Path parameters too (/keys/Infinity): the validator coerces such a word to a number that
+  // passes `type: integer`, and it would reach a query (SQLite finds no row; PostgreSQL fails).
+  if (req.operation) {
+    const template = req.operation.template.split('/');
+    const actual = req.originalUrl
+      .split('?')[0]!
+      .replace(/^\/api\/v1/, '')
+      .split('/');
+    template.forEach((segment, i) => {
+      const name = /^\{(.+)\}$/.exec(segment)?.[1];
+      if (!name || actual[i] === undefined) return;
+      let value: string;
+      try {
+        value = decodeURIComponent(actual[i]!);
+      } catch {
+        return;
+      }
+      if (value.includes('\u0000')) errors.push({ path: `/params/${name}`, message: NUL_MESSAGE });
+      else if (nonFiniteText(value))
+        errors.push({
+          path: `/params/${name}`,
+          message: `'${value.trim()}' is not a finite number`,
+        });
+    });
+  }
   const query = req.query as unknown;
   if (query && typeof query === 'object') {
     for (const [k, v] of Object.entries(query)) walkQuery(v, `/query/${escapeKey(k)}`, errors);
