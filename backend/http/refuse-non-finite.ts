@@ -19,6 +19,9 @@ function nonFiniteText(value: string): boolean {
  */
 const NUL_MESSAGE = 'must not contain the NUL character (U+0000)';
 
+/** The document's numeric path parameters (components/parameters/Id); slugs and versions are text. */
+const NUMERIC_PATH_PARAMETERS = new Set(['id']);
+
 /** Query values are strings, or arrays and objects of them under the extended parser. */
 function walkQuery(value: unknown, path: string, out: FieldError[]): void {
   if (typeof value === 'string') {
@@ -74,7 +77,7 @@ export const refuseNonFinite: RequestHandler = (req, _res, next) => {
         return;
       }
       if (value.includes('\u0000')) errors.push({ path: `/params/${name}`, message: NUL_MESSAGE });
-      else if (nonFiniteText(value))
+      else if (NUMERIC_PATH_PARAMETERS.has(name) && nonFiniteText(value))
         errors.push({
           path: `/params/${name}`,
           message: `'${value.trim()}' is not a finite number`,
