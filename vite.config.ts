@@ -1,8 +1,10 @@
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 
 const apiPort = Number(process.env.API_PORT ?? 3001);
+/** tests/pg (several instances on one database) runs only against PostgreSQL: npm run test:pg. */
+const postgres = /^postgres(ql)?:\/\//i.test(process.env.DATABASE_URL ?? '');
 
 export default defineConfig({
   plugins: [react(), tailwindcss()],
@@ -16,6 +18,7 @@ export default defineConfig({
   test: {
     environment: 'node',
     include: ['tests/**/*.test.ts'],
+    exclude: [...configDefaults.exclude, ...(postgres ? [] : ['tests/pg/**'])],
     testTimeout: 20_000,
     hookTimeout: 120_000,
     // The browser tests each start the product on its own port; run files one at a time so two

@@ -11,7 +11,10 @@ import { loadApiDocument } from './api-document';
 import { authenticate } from './auth/authenticate';
 import { enforceRoles } from './auth/enforce-roles';
 import { createAccountRepositories } from './db/account-repositories';
+import { catalogueVersion } from './db/catalogue-version';
+import { sharedByInstances } from './db/dialect';
 import { countUsage } from './http/count-usage';
+import { limiterStores } from './http/knex-rate-limit-store';
 import {
   estimateRateLimit,
   DEFAULT_ESTIMATE_LIMITS,
@@ -85,6 +88,11 @@ export interface AppOptions {
   estimateLimits?: Partial<EstimateLimits>;
   /** Serve the built front end from dist/client when it exists (off for API-only tests). */
   serveClient?: boolean;
+  /**
+   * Express's `trust proxy` (TRUST_PROXY): which proxies' X-Forwarded-For to believe, so that
+   * limits and the audit log see the client's address rather than the proxy's. Off by default.
+   */
+  trustProxy?: boolean | number | string;
 }
 
 /** Largest JSON body accepted: a reading or an estimate request is a few hundred bytes. */
@@ -95,7 +103,10 @@ export function createApp(options: AppOptions): Express {
   const { knex } = options;
   const apiDocument = loadApiDocument();
   const alloyRepository = createAlloyRepository(knex);
-  const catalogue = new CatalogueStore(alloyRepository);
+  const catalogue = new CatalogueStore(
+    alloyRepository,
+    sharedByInstances(knex) ? () => catalogueVersion(knex) : undefined,
+  );
   const repos = createAccountRepositories(knex);
   const outbox = createOutboxRepository(knex);
   const production = options.production ?? false;
@@ -109,9 +120,12 @@ export function createApp(options: AppOptions): Express {
   const accounts = createAccountService(access);
   const keys = createKeyService(access);
   const credentials = options.credentialLimits ?? DEFAULT_CREDENTIAL_LIMITS;
+  // Counted in the database when several instances may share it (PostgreSQL), in memory on SQLite.
+  const stores = limiterStores(knex);
   const app = express();
 
   app.disable('x-powered-by');
+  app.set('trust proxy', options.trustProxy ?? false);
   // /api/v1/Users and /api/v1/users/ are not /api/v1/users (and routers say the same below).
   app.set('case sensitive routing', true);
   app.set('strict routing', true);
@@ -144,10 +158,10 @@ export function createApp(options: AppOptions): Express {
   app.use(
     '/api/v1',
     authenticate(repos, options.jwtSecret, production, options.publicOrigin),
-    apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }),
+    apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }, stores),
     countUsage(repos),
     enforceRoles(),
-    estimateRateLimit({ ...DEFAULT_ESTIMATE_LIMITS, ...options.estimateLimits }),
+    estimateRateLimit({ ...DEFAULT_ESTIMATE_LIMITS, ...options.estimateLimits }, stores),
   );
 
   app.use(
@@ -165,7 +179,7 @@ export function createApp(options: AppOptions): Express {
   );
 
   const v1 = express.Router({ caseSensitive: true, strict: true });
-  v1.use(healthRouter(catalogue, apiDocument.info.version));
+  v1.use(healthRouter(catalogue, knex, apiDocument.info.version));
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
   // Before the alloys router: /alloys/export and /alloys/{slug}/history must win over /alloys/{slug}.
@@ -205,7 +219,7 @@ export function createApp(options: AppOptions): Express {
       pool: estimatePool,
     }),
   );
-  v1.use(authRouter(accounts, credentialThrottles(credentials), production));
+  v1.use(authRouter(accounts, credentialThrottles(credentials, undefined, stores), production));
   v1.use(meRouter(repos));
   v1.use(keysRouter(keys, repos));
   v1.use(adminRouter(repos, keys, outbox));

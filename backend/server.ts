@@ -1,7 +1,7 @@
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { loadJwtSecret } from './auth/session-tokens';
-import { readConfig, type Config } from './config';
+import { describeDatabase, readConfig, type Config } from './config';
 import { createAccountRepositories } from './db/account-repositories';
 import { createKnex } from './db/knex';
 import { prepareDatabase } from './db/prepare';
@@ -9,6 +9,7 @@ import { claimServerLock } from './db/server-lock';
 import { createEstimatePool } from './estimates/pool';
 import { createMailer } from './mail/mailer';
 import { createOutboxRepository } from './mail/outbox-repository';
+import { runExpiryNotices } from './services/expiry-notices';
 import { createKeyService } from './services/keys';
 
 const HOUR = 3600_000;
@@ -24,19 +25,29 @@ function describeMode(config: Config): string {
 
 /** Starts the service: migrate and seed before listening, drain and close on SIGTERM/SIGINT. */
 export async function startServer(): Promise<Server> {
-  const config = readConfig();
-  let releaseLock = () => {};
+  let config: Config;
   try {
-    releaseLock = claimServerLock(config.databaseFile);
+    config = readConfig();
   } catch (error) {
     console.error((error as Error).message);
     process.exit(1);
   }
-  const knex = createKnex(config.databaseFile);
+  const database = describeDatabase(config);
+  let releaseLock = () => {};
+  // A SQLite file belongs to one server; a PostgreSQL database is meant to be shared by several.
+  if (!config.databaseUrl) {
+    try {
+      releaseLock = claimServerLock(config.databaseFile);
+    } catch (error) {
+      console.error((error as Error).message);
+      process.exit(1);
+    }
+  }
+  const knex = createKnex(config.databaseUrl ?? config.databaseFile);
   try {
     await prepareDatabase(knex, { demo: true, demoAccounts: config.demoAccounts });
   } catch (error) {
-    console.error(`Database preparation failed for ${config.databaseFile}:`, error);
+    console.error(`Database preparation failed for ${database}:`, error);
     await knex.destroy();
     releaseLock();
     process.exit(1);
@@ -66,20 +77,19 @@ export async function startServer(): Promise<Server> {
     production: config.production,
     logLevel: config.logLevel,
     estimatePool,
+    trustProxy: config.trustProxy,
   });
   const server = app.listen(config.port, config.host, () => {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : config.port;
     publicUrl ||= `http://${config.host}:${port}`;
-    console.log(
-      `Conductory is serving on http://${config.host}:${port}/ (database ${config.databaseFile})`,
-    );
+    console.log(`Conductory is serving on http://${config.host}:${port}/ (database ${database})`);
     console.log(describeMode(config));
     if (!config.smtpUrl)
       console.log('Mail goes to a local fake SMTP server and its outbox; SMTP_URL sends for real.');
   });
 
-  // Keys about to expire: warn their owners, at start and hourly.
+  // Keys about to expire: warn their owners, at start and hourly (one instance at a time).
   const access = {
     repos: createAccountRepositories(knex),
     secret: jwtSecret,
@@ -88,9 +98,9 @@ export async function startServer(): Promise<Server> {
     production: config.production,
   };
   const notices = () =>
-    void createKeyService(access)
-      .sendExpiryNotices()
-      .catch((e) => console.error('expiry notices failed', e));
+    void runExpiryNotices(knex, createKeyService(access)).catch((e) =>
+      console.error('expiry notices failed', e),
+    );
   notices();
   const hourly = setInterval(notices, HOUR);
   hourly.unref();

@@ -1,7 +1,10 @@
 /**
- * `npm run bench`: catalogue search and Match against a bare Express JSON endpoint, with autocannon
- * on loopback in the same run; prints throughput, p50/p99 latency and the ratio to the bare
- * endpoint; then a batch Match of 10,000 readings against as many single Matches. Ratios travel between machines; absolute numbers do not. No assertion: a report.
+ * `npm run bench`: catalogue search, a filtered list and Match, each beside bare Express and bare
+ * node:http answering the product's own bytes for that case (bench/servers.ts), with autocannon
+ * on loopback in the same run; prints throughput, p50/p99 latency, the ratios, the product at 100
+ * connections for 30 s, and the servers' peak RSS; then a batch Match of 10,000 readings against
+ * as many single Matches, and a sort plan against its naive cost. Ratios travel between machines;
+ * absolute numbers do not. No assertion: a report.
  */
 import { fork } from 'node:child_process';
 import path from 'node:path';
@@ -12,75 +15,79 @@ import { benchSortPlan } from './sort-plan';
 import { benchBatchMatch, printBatchBench } from './match-batch';
 import { initialJavaScript, INITIAL_JS_BUDGET_KB } from './initial-js';
 import { heaviestLaunch } from '../tests/helpers/launches';
+import { productCases, type BenchPorts, type ProductCase } from './cases';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
 const CONNECTIONS = 10;
-
-interface Case {
-  name: string;
-  target: 'bare' | 'product';
-  method: 'GET' | 'POST';
-  path: string;
-  body?: unknown;
-}
-
-const cases: Case[] = [
-  { name: 'bare Express GET /json', target: 'bare', method: 'GET', path: '/json' },
-  {
-    name: 'catalogue search q=brass',
-    target: 'product',
-    method: 'GET',
-    path: '/api/v1/alloys?q=brass',
-  },
-  {
-    name: 'catalogue filter, sorted',
-    target: 'product',
-    method: 'GET',
-    path: '/api/v1/alloys?family=aluminium&sort=-conductivity',
-  },
-  {
-    name: 'bare Express POST /json',
-    target: 'bare',
-    method: 'POST',
-    path: '/json',
-    body: { conductivity: { value: 28, unit: '%IACS' } },
-  },
-  {
-    name: 'Match (28 %IACS, 8.53 g/cm³)',
-    target: 'product',
-    method: 'POST',
-    path: '/api/v1/match',
-    body: { conductivity: { value: 28, unit: '%IACS' }, density: { value: 8.53, unit: 'g/cm3' } },
-  },
-];
+/** The overload check: many connections for a long while, counting errors (issue 13: 0 in 30 s). */
+const MANY_CONNECTIONS = 100;
+const LONG_S = Number(process.env.BENCH_LONG_SECONDS ?? 30);
 
 const servers = fork(path.join(projectRoot, 'bench', 'servers.ts'), {
   execArgv: ['--import', 'tsx'],
   stdio: ['ignore', 'ignore', 'inherit', 'ipc'],
 });
-const ports = await new Promise<{ product: number; bare: number }>((resolve) =>
-  servers.once('message', resolve as never),
-);
+const ports = await new Promise<BenchPorts>((resolve) => servers.once('message', resolve as never));
 
-const rows: Array<{ name: string; rps: number; p50: number; p99: number; errors: number }> = [];
-for (const c of cases) {
-  process.stdout.write(`  ${c.name}…\n`);
+interface Row {
+  name: string;
+  rps: number;
+  p50: number;
+  p99: number;
+  errors: number;
+}
+
+async function load(
+  name: string,
+  port: number,
+  c: ProductCase,
+  urlPath: string,
+  connections = CONNECTIONS,
+  duration = DURATION_S,
+): Promise<Row> {
+  process.stdout.write(`  ${name}…\n`);
   const result = await autocannon({
-    url: `http://127.0.0.1:${ports[c.target]}${c.path}`,
+    url: `http://127.0.0.1:${port}${urlPath}`,
     method: c.method,
-    connections: CONNECTIONS,
-    duration: DURATION_S,
+    connections,
+    duration,
     headers: c.body ? { 'content-type': 'application/json' } : {},
     body: c.body ? JSON.stringify(c.body) : undefined,
   });
-  rows.push({
-    name: c.name,
+  return {
+    name,
     rps: result.requests.average,
     p50: result.latency.p50,
     p99: result.latency.p99,
-    errors: result.errors + result.non2xx,
-  });
+    errors: result.errors + result.timeouts + result.non2xx,
+  };
 }
+
+// Side by side in one run: each case on node:http, on bare Express, then on the product.
+const groups: Array<{ c: ProductCase; node: Row; express: Row; product: Row }> = [];
+for (const c of productCases) {
+  const node = await load(`node:http, ${c.key} bytes`, ports.node, c, `/bare/${c.key}`);
+  const bareExpress = await load(
+    `bare Express, ${c.key} bytes`,
+    ports.express,
+    c,
+    `/bare/${c.key}`,
+  );
+  const product = await load(c.name, ports.product, c, c.path);
+  groups.push({ c, node, express: bareExpress, product });
+}
+const overload: Row[] = [];
+for (const c of productCases.filter((x) => x.key !== 'filter'))
+  overload.push(
+    await load(
+      `${c.name}, ${MANY_CONNECTIONS} connections`,
+      ports.product,
+      c,
+      c.path,
+      MANY_CONNECTIONS,
+      LONG_S,
+    ),
+  );
 
 /**
  * /health while the calculators are saturated: launch requests at the schema's largest filament
@@ -119,22 +126,45 @@ process.stdout.write('  batch Match against single Matches…\n');
 const batch = await benchBatchMatch(ports.product);
 process.stdout.write('  /health while the calculators are saturated…\n');
 const saturated = await healthUnderLoad();
+
+const peakRssKb = await new Promise<number>((resolve) => {
+  servers.once('message', (m: { peakRssKb: number }) => resolve(m.peakRssKb));
+  servers.send('peak-rss');
+});
 servers.disconnect();
 
-const bareGet = rows[0]!.rps;
-const barePost = rows[3]!.rps;
-console.log(`\nautocannon, ${CONNECTIONS} connections, ${DURATION_S} s each, loopback\n`);
+const row = (r: Row, ratios: string) =>
+  `${r.name.padEnd(40)} ${r.rps.toFixed(0).padStart(8)} ${r.p50.toFixed(1).padStart(8)} ${r.p99.toFixed(1).padStart(8)} ${String(r.errors).padStart(7)}   ${ratios}`;
 console.log(
-  'case                                   req/s    p50 ms   p99 ms   errors   ratio to bare',
+  `\nautocannon, ${CONNECTIONS} connections, ${DURATION_S} s each, loopback, no compression asked`,
 );
-for (const [i, r] of rows.entries()) {
-  const bare = i < 3 ? bareGet : barePost;
+console.log(
+  'case                                        req/s   p50 ms   p99 ms  errors   ratio to bare Express / to node:http',
+);
+for (const g of groups) {
+  console.log(`${g.c.name} (${ports.bytes[g.c.key]} bytes)`);
+  console.log(row({ ...g.node, name: '  node:http, same bytes' }, ''));
   console.log(
-    `${r.name.padEnd(36)} ${r.rps.toFixed(0).padStart(8)} ${r.p50.toFixed(1).padStart(9)} ${r.p99.toFixed(1).padStart(8)} ${String(r.errors).padStart(8)}   ${(r.rps / bare).toFixed(2)}`,
+    row(
+      { ...g.express, name: '  bare Express + compression, same bytes' },
+      `1.00 / ${(g.express.rps / g.node.rps).toFixed(2)}`,
+    ),
+  );
+  console.log(
+    row(
+      { ...g.product, name: '  the product' },
+      `${(g.product.rps / g.express.rps).toFixed(2)} / ${(g.product.rps / g.node.rps).toFixed(2)}`,
+    ),
   );
 }
+console.log(`\nThe product with ${MANY_CONNECTIONS} connections for ${LONG_S} s:`);
+for (const r of overload) console.log(row(r, ''));
 console.log(
-  '\nTargets (quality.md): catalogue search ≥ 0.50 of bare with p99 ≤ 25 ms; calculators p99 ≤ 50 ms.',
+  `\nPeak RSS of the servers' process (all three servers): ${(peakRssKb / 1024).toFixed(0)} MB`,
+);
+console.log(
+  '\nTargets (quality.md, issue 13): search and Match ≥ 0.50 of bare Express with p99 ≤ 25 ms at ' +
+    `${CONNECTIONS} connections, 0 errors at ${MANY_CONNECTIONS}; calculators p99 ≤ 50 ms.`,
 );
 const h = saturated.result;
 console.log(

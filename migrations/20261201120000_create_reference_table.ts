@@ -16,7 +16,7 @@ export async function up(knex: Knex): Promise<void> {
     t.text('family').notNullable();
     t.text('uns');
     t.boolean('magnetic').notNullable().defaultTo(false);
-    t.float('relative_permeability').notNullable().defaultTo(1);
+    t.double('relative_permeability').notNullable().defaultTo(1);
     t.text('composition_json').notNullable().defaultTo('{}');
     t.text('condition');
     t.text('notes');
@@ -26,11 +26,11 @@ export async function up(knex: Knex): Promise<void> {
     t.integer('id').primary();
     t.integer('alloy_id').notNullable().references('alloys.id').onDelete('CASCADE');
     t.text('quantity').notNullable();
-    t.float('nominal').notNullable();
-    t.float('min');
-    t.float('max');
+    t.double('nominal').notNullable();
+    t.double('min');
+    t.double('max');
     t.text('unit').notNullable();
-    t.float('reference_temperature_k').notNullable();
+    t.double('reference_temperature_k').notNullable();
     t.text('condition');
     t.integer('source_id').notNullable().references('sources.id');
     t.index(['alloy_id', 'quantity']);

@@ -7,10 +7,10 @@ export async function up(knex: Knex): Promise<void> {
     t.text('slug').notNullable().unique();
     t.text('name').notNullable();
     t.text('description');
-    t.float('diameter_m').notNullable();
+    t.double('diameter_m').notNullable();
     // Layers from the face toward the coil downward: [{ alloy, thicknessM }]
     t.text('layers_json').notNullable();
-    t.float('mass_kg');
+    t.double('mass_kg');
     t.boolean('built_in').notNullable().defaultTo(false);
     t.boolean('invented').notNullable().defaultTo(false);
   });
@@ -19,11 +19,11 @@ export async function up(knex: Knex): Promise<void> {
     t.text('label').notNullable();
     t.text('site').notNullable();
     t.text('product').notNullable();
-    t.float('conductivity_s_per_m').notNullable();
-    t.float('frequency_hz');
-    t.float('temperature_k').notNullable();
-    t.float('density_kg_per_m3');
-    t.float('mass_kg');
+    t.double('conductivity_s_per_m').notNullable();
+    t.double('frequency_hz');
+    t.double('temperature_k').notNullable();
+    t.double('density_kg_per_m3');
+    t.double('mass_kg');
     t.boolean('invented').notNullable().defaultTo(false);
   });
 }

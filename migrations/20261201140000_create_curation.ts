@@ -34,10 +34,10 @@ export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('measurements', (t) => {
     t.increments('id');
     t.integer('alloy_id').notNullable().references('alloys.id').onDelete('CASCADE');
-    t.float('conductivity_s_per_m').notNullable();
-    t.float('frequency_hz').notNullable();
-    t.float('temperature_k').notNullable();
-    t.float('uncertainty_percent').notNullable();
+    t.double('conductivity_s_per_m').notNullable();
+    t.double('frequency_hz').notNullable();
+    t.double('temperature_k').notNullable();
+    t.double('uncertainty_percent').notNullable();
     t.text('sample').notNullable();
     t.text('instrument').notNullable();
     t.integer('source_id').notNullable().references('sources.id');

@@ -7,7 +7,7 @@ import type { Knex } from 'knex';
  */
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('sort_plans', (t) => {
-    t.integer('id').primary();
+    t.increments('id');
     t.integer('owner_id').notNullable().references('id').inTable('users').onDelete('CASCADE');
     t.text('name').notNullable();
     t.text('inputs_json').notNullable();

@@ -22,7 +22,14 @@ if (!to) {
   process.exit(2);
 }
 
-const { databaseFile } = readConfig();
+const { databaseFile, databaseUrl } = readConfig();
+if (databaseUrl) {
+  // PostgreSQL has its own tools, which a person runs against DATABASE_URL (README, "Backups").
+  console.error(
+    'db:backup: DATABASE_URL is set: this command copies the SQLite file. For PostgreSQL use pg_dump and pg_restore (README, "Backups").',
+  );
+  process.exit(2);
+}
 try {
   const summary = await backupDatabase(databaseFile, to);
   console.log(`Backed up ${databaseFile} to ${to}: integrity_check ok.`);

@@ -21,7 +21,14 @@ if (!from) {
   process.exit(2);
 }
 
-const { databaseFile } = readConfig();
+const { databaseFile, databaseUrl } = readConfig();
+if (databaseUrl) {
+  // PostgreSQL has its own tools, which a person runs against DATABASE_URL (README, "Backups").
+  console.error(
+    'db:restore: DATABASE_URL is set: this command copies the SQLite file. For PostgreSQL use pg_dump and pg_restore (README, "Backups").',
+  );
+  process.exit(2);
+}
 try {
   const summary = await restoreDatabase(from, databaseFile);
   console.log(`Restored ${from} to ${databaseFile}: integrity_check ok.`);

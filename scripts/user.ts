@@ -1,5 +1,5 @@
 /**
- * The operator's command line for accounts (honours DATABASE_FILE):
+ * The operator's command line for accounts (honours DATABASE_URL, else DATABASE_FILE):
  *   npm run user -- create --email E --password P --role R [--name N]
  *   npm run user -- disable --email E
  *   npm run user -- set-role --email E --role R
@@ -30,7 +30,7 @@ function fail(message: string): never {
 }
 
 const config = readConfig();
-const knex = createKnex(config.databaseFile);
+const knex = createKnex(config.databaseUrl ?? config.databaseFile);
 try {
   await prepareDatabase(knex, { demo: false });
   const repos = createAccountRepositories(knex);

@@ -141,11 +141,13 @@ export function createAccountRepositories(knex: Knex) {
         .where('expires_at', '>', now()),
   };
   const usage = {
+    // One upsert; the column is named with its table because PostgreSQL would read a bare
+    // `count` in DO UPDATE as ambiguous (the row, or the proposed EXCLUDED row).
     increment: (keyId: number, day: string, group: string) =>
-      knex.raw(
-        'INSERT INTO usage (key_id, day, route_group, count) VALUES (?, ?, ?, 1) ON CONFLICT (key_id, day, route_group) DO UPDATE SET count = count + 1',
-        [keyId, day, group],
-      ),
+      knex('usage')
+        .insert({ key_id: keyId, day, route_group: group, count: 1 })
+        .onConflict(['key_id', 'day', 'route_group'])
+        .merge({ count: knex.raw('?? + 1', ['usage.count']) }),
     ofUser: (userId: number, fromDay: string) =>
       knex('usage as u')
         .join('api_keys as k', 'k.id', 'u.key_id')

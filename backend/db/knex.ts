@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import knexFactory, { type Knex } from 'knex';
+import pg from 'pg';
 import { migrationSource } from './migration-source';
 
 /**
@@ -20,12 +21,47 @@ interface SqliteConnection {
   pragma(source: string): unknown;
 }
 
-export function createKnex(databaseFile: string): Knex {
-  if (databaseFile !== ':memory:')
-    fs.mkdirSync(path.dirname(path.resolve(databaseFile)), { recursive: true });
+/** A `postgres://` or `postgresql://` address (DATABASE_URL); anything else is a SQLite file. */
+export function isPostgresUrl(target: string): boolean {
+  return /^postgres(ql)?:\/\//i.test(target);
+}
+
+export interface PostgresPoolOptions {
+  /** Connections kept open while idle (2 for a server, 0 for the tests' many small databases). */
+  min?: number;
+  max?: number;
+}
+
+/**
+ * PostgreSQL's bigint (count(*), bigInteger columns) arrives from pg as text, to keep digits past
+ * 2^53; SQLite gives numbers. Counts and millisecond times are far below 2^53, so they are read as
+ * numbers here, on our connections only, and the same code reads the same values on both.
+ */
+const pgTypes = {
+  getTypeParser: (oid: number, format: string) =>
+    oid === pg.types.builtins.INT8
+      ? (value: string) => Number(value)
+      : pg.types.getTypeParser(oid, format as 'text'),
+};
+
+/**
+ * The one Knex instance of a process: SQLite (a file, or `:memory:`) by default, PostgreSQL when
+ * given a `postgres://` address. Every query, migration and seed goes through the same Knex code;
+ * the few places where the dialects differ ask `dialectOf` (backend/db/dialect.ts).
+ */
+export function createKnex(target: string, pool: PostgresPoolOptions = {}): Knex {
+  if (isPostgresUrl(target)) {
+    return knexFactory({
+      client: 'pg',
+      connection: { connectionString: target, application_name: 'conductory', types: pgTypes },
+      pool: { min: pool.min ?? 2, max: pool.max ?? 10, idleTimeoutMillis: 10_000 },
+      migrations: { migrationSource },
+    });
+  }
+  if (target !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(target)), { recursive: true });
   return knexFactory({
     client: 'better-sqlite3',
-    connection: { filename: databaseFile },
+    connection: { filename: target },
     useNullAsDefault: true,
     // better-sqlite3 is synchronous: one connection serves every request, and an in-memory
     // database must stay on that one connection or each new one would be empty.

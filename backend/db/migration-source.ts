@@ -4,6 +4,7 @@ import * as createStacksAndReadings from '../../migrations/20261201120100_create
 import * as createAccounts from '../../migrations/20261201130000_create_accounts';
 import * as createCuration from '../../migrations/20261201140000_create_curation';
 import * as addAlloyAliases from '../../migrations/20261201230000_add_alloy_aliases';
+import * as createSharedState from '../../migrations/20261202010000_create_shared_state';
 import * as addValueQuotes from '../../migrations/20261202090000_add_value_quotes';
 import * as createSortPlans from '../../migrations/20261202100000_create_sort_plans';
 
@@ -18,6 +19,7 @@ export const migrations: Record<string, Knex.Migration> = {
   '20261201130000_create_accounts': createAccounts,
   '20261201140000_create_curation': createCuration,
   '20261201230000_add_alloy_aliases': addAlloyAliases,
+  '20261202010000_create_shared_state': createSharedState,
   '20261202090000_add_value_quotes': addValueQuotes,
   '20261202100000_create_sort_plans': createSortPlans,
 };

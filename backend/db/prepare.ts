@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { dialectOf, withAdvisoryLock } from './dialect';
 import { PRAGMAS } from './knex';
 import { demoAccountSeeds, demoSeeds, referenceSeeds } from './seed-source';
 
@@ -12,10 +13,17 @@ export interface PrepareOptions {
 /**
  * Brings a database up to date before the server listens: migrations, then the reference table
  * and the demo scenario when the database has none yet (an existing table is never overwritten).
+ * On PostgreSQL several instances may start at once: one prepares while the others wait on an
+ * advisory lock, then find the work done (Knex's own migration lock would fail them instead, and
+ * two seeders would both see an empty table).
  */
 export async function prepareDatabase(knex: Knex, options: PrepareOptions): Promise<void> {
+  await withAdvisoryLock(knex, 'prepare', () => prepareLocked(knex, options), { wait: true });
+}
+
+async function prepareLocked(knex: Knex, options: PrepareOptions): Promise<void> {
   await knex.migrate.latest();
-  await checkPragmas(knex);
+  if (dialectOf(knex) === 'sqlite') await checkPragmas(knex);
   const [{ count }] = (await knex('alloys').count({ count: '*' })) as [{ count: number }];
   if (Number(count) === 0) {
     for (const seed of referenceSeeds) await seed(knex);

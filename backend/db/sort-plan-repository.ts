@@ -35,18 +35,22 @@ function fromRow(r: Record<string, unknown>): SortPlanRow {
 
 export function createSortPlanRepository(knex: Knex): SortPlanRepository {
   return {
-    async insert(row) {
-      const [id] = (await knex('sort_plans').insert({
-        owner_id: row.ownerId,
-        name: row.name,
-        inputs_json: JSON.stringify(row.inputs),
-        release_version: row.release.version,
-        release_checksum: row.release.checksum,
-        result_json: row.resultJson,
-        result_sha256: row.resultSha256,
-        created_at: row.createdAt,
-      })) as number[];
-      return id!;
+    async insert(plan) {
+      // RETURNING gives the new id on both SQLite and PostgreSQL (a bare insert returns none on
+      // PostgreSQL).
+      const [row] = await knex('sort_plans')
+        .insert({
+          owner_id: plan.ownerId,
+          name: plan.name,
+          inputs_json: JSON.stringify(plan.inputs),
+          release_version: plan.release.version,
+          release_checksum: plan.release.checksum,
+          result_json: plan.resultJson,
+          result_sha256: plan.resultSha256,
+          created_at: plan.createdAt,
+        })
+        .returning('id');
+      return (row as { id: number }).id;
     },
     async listOwned(ownerId) {
       const rows = await knex('sort_plans').where({ owner_id: ownerId }).orderBy('id', 'desc');

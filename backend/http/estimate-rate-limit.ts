@@ -1,6 +1,7 @@
 import type { RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Caller } from '../auth/roles';
+import type { LimiterStores } from './knex-rate-limit-store';
 import { ProblemError } from './problem';
 
 /**
@@ -20,8 +21,12 @@ export const DEFAULT_ESTIMATE_LIMITS: EstimateLimits = {
  * Applies to the calculations (POSTs tagged `estimates` in openapi.yaml) and to other heavy
  * operations (`x-heavy: true`, e.g. a batch Match, counted as one); others pass untouched.
  */
-export function estimateRateLimit(limits: EstimateLimits): RequestHandler {
+export function estimateRateLimit(
+  limits: EstimateLimits,
+  stores: LimiterStores = () => undefined,
+): RequestHandler {
   const limiter = rateLimit({
+    store: stores('estimates'),
     windowMs: 60_000,
     limit: (req) => limits[req.principal.role],
     standardHeaders: 'draft-8',

@@ -56,6 +56,37 @@ function fieldErrors(err: HttpLikeError): FieldError[] | undefined {
 }
 
 /**
+ * Errors that say the database cannot be reached right now (rather than that a query was wrong):
+ * Knex's pool (destroyed, or no connection within its timeout), the network, and PostgreSQL's
+ * connection classes (08: connection exception; 57P01-03: shutting down or starting; 53300: too
+ * many connections). They answer 503 with Retry-After, which a proxy or a client may retry.
+ */
+const UNAVAILABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  '08000',
+  '08001',
+  '08003',
+  '08004',
+  '08006',
+  '57P01',
+  '57P02',
+  '57P03',
+  '53300',
+]);
+
+export function databaseUnavailable(error: unknown): boolean {
+  const e = error as { code?: unknown; name?: unknown; message?: unknown } | null;
+  if (!e || typeof e !== 'object') return false;
+  return (
+    (typeof e.code === 'string' && UNAVAILABLE_CODES.has(e.code)) ||
+    e.name === 'KnexTimeoutError' ||
+    (typeof e.message === 'string' && e.message.startsWith('Unable to acquire a connection'))
+  );
+}
+
+/**
  * The one error handler. It must come after every route so that any error a route or the
  * validator raises ends here and leaves as problem+json; nothing below 500 is logged as a fault,
  * and no stack trace ever reaches the client.
@@ -73,6 +104,19 @@ export const problemHandler: ErrorRequestHandler = (error, req, res, _next) => {
     title = error.title;
     detail = error.detail;
     errors = error.errors;
+  } else if ((error as { code?: unknown }).code === '22021') {
+    // PostgreSQL cannot store this text (a NUL character that came another way than a JSON body
+    // or a query, e.g. a form field): the request's fault, as on SQLite's side of
+    // refuse-non-finite.ts.
+    status = 400;
+    title = titles[400]!;
+    detail = 'Text must not contain the NUL character (U+0000).';
+  } else if (databaseUnavailable(error)) {
+    req.log?.error({ err: error }, 'database unavailable');
+    status = 503;
+    title = titles[503]!;
+    detail = 'The database does not answer.';
+    res.set('Retry-After', '5');
   } else if (isOutsideModelError(error)) {
     // An input outside the range where a model holds (shared/physics/errors.ts).
     status = 422;

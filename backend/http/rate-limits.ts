@@ -1,6 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type { Caller } from '../auth/roles';
+import type { LimiterStores } from './knex-rate-limit-store';
 import { ProblemError } from './problem';
 
 /** Requests per minute by caller; visitors are counted per address, the others per key or person. */
@@ -17,8 +18,12 @@ const tooMany = (retryAfterS: number) =>
   new ProblemError(429, 'Too many requests', `Slow down: try again in ${retryAfterS} s.`);
 
 /** One limiter for the API, with RateLimit headers (IETF draft 8) and Retry-After on 429. */
-export function apiRateLimit(limits: RateLimits): RequestHandler {
+export function apiRateLimit(
+  limits: RateLimits,
+  stores: LimiterStores = () => undefined,
+): RequestHandler {
   return rateLimit({
+    store: stores('api'),
     windowMs: 60_000,
     limit: (req) => limits[req.principal.role],
     standardHeaders: 'draft-8',
@@ -63,6 +68,7 @@ export const DEFAULT_CREDENTIAL_LIMITS: Required<CredentialLimits> = {
 export function credentialThrottles(
   limits: CredentialLimits,
   windowMs = 15 * 60_000,
+  stores: LimiterStores = () => undefined,
 ): RequestHandler[] {
   const ceiling = limits.perAccountCeiling ?? Math.max(100, 10 * limits.perAccount);
   const common = {
@@ -76,12 +82,23 @@ export function credentialThrottles(
   const account = (req: Request) =>
     `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
   return [
-    rateLimit({ ...common, limit: limits.perAddress, keyGenerator: address }),
     rateLimit({
       ...common,
+      store: stores('credentials-address'),
+      limit: limits.perAddress,
+      keyGenerator: address,
+    }),
+    rateLimit({
+      ...common,
+      store: stores('credentials-account-address'),
       limit: limits.perAccount,
       keyGenerator: (req) => `${account(req)}|${address(req)}`,
     }),
-    rateLimit({ ...common, limit: ceiling, keyGenerator: account }),
+    rateLimit({
+      ...common,
+      store: stores('credentials-account'),
+      limit: ceiling,
+      keyGenerator: account,
+    }),
   ];
 }

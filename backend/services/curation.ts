@@ -1,5 +1,7 @@
 import type { Knex } from 'knex';
 import type { AccountRepositories } from '../db/account-repositories';
+import { bumpCatalogueVersion } from '../db/catalogue-version';
+import { serializeWith } from '../db/dialect';
 import { ProblemError } from '../http/problem';
 import type { Mailer } from '../mail/mailer';
 import { templates } from '../mail/templates';
@@ -417,15 +419,25 @@ export function createCurationService(
       if (revision.status !== 'pending')
         throw new ProblemError(409, 'Conflict', `This revision is ${revision.status} already.`);
       await knex.transaction(async (trx) => {
-        if (decision === 'approve') await apply(trx, revision, reviewer.userId);
-        await trx('revisions')
-          .where({ id })
+        // New sources, alloys and values take max(id) + 1: one approval at a time writes them.
+        await serializeWith(trx, 'curation');
+        // Decided once: the update claims the pending revision, so a second reviewer at the same
+        // moment (another request, or another instance on PostgreSQL, where it waits for this
+        // row's lock) finds it decided and applies nothing.
+        const claimed = await trx('revisions')
+          .where({ id, status: 'pending' })
           .update({
             status: decision === 'approve' ? 'approved' : 'rejected',
             reviewer_id: reviewer.userId,
             review_comment: comment,
             reviewed_at: now(),
           });
+        if (claimed !== 1)
+          throw new ProblemError(409, 'Conflict', 'This revision has been reviewed already.');
+        if (decision === 'approve') {
+          await apply(trx, revision, reviewer.userId);
+          await bumpCatalogueVersion(trx);
+        }
       });
       if (decision === 'approve') catalogue.invalidate();
       await repos.audit.record({

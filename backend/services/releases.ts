@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import type { Knex } from 'knex';
 import type { AlloyRecord } from '../../shared/catalogue/alloy-record';
 import type { AlloyRepository } from '../db/alloy-repository';
+import { serializeWith } from '../db/dialect';
 import { ProblemError } from '../http/problem';
 import { Catalogue } from './catalogue';
 
@@ -27,6 +28,43 @@ function snapshotOf(records: AlloyRecord[]) {
     .map(({ id: _id, ...rest }) => rest);
 }
 
+/** Numbers and writes a release inside the caller's serialised transaction; returns its version. */
+async function insertRelease(
+  trx: Knex.Transaction,
+  userId: number,
+  d: Date,
+  month: string,
+  json: string,
+): Promise<string> {
+  const [{ n }] = (await trx('releases')
+    .where('version', 'like', `${month}.%`)
+    .count({ n: '*' })) as [{ n: number | string }];
+  const version = `${month}.${Number(n)}`;
+  const last = await trx('releases').orderBy('id', 'desc').first();
+  const changelog = await trx('revisions')
+    .where({ status: 'approved' })
+    .modify((q) => (last ? q.where('reviewed_at', '>', last.created_at) : q))
+    .select('id', 'kind', 'alloy_slug', 'reason', 'reviewed_at')
+    .orderBy('id');
+  await trx('releases').insert({
+    version,
+    created_at: d.toISOString(),
+    created_by: userId,
+    checksum: sha256(json),
+    snapshot_json: json,
+    changelog_json: JSON.stringify(
+      changelog.map((c: Record<string, unknown>) => ({
+        revisionId: c.id,
+        kind: c.kind,
+        alloy: c.alloy_slug,
+        reason: c.reason,
+        approvedAt: c.reviewed_at,
+      })),
+    ),
+  });
+  return version;
+}
+
 /**
  * Immutable, versioned, checksummed snapshots of the published table. Versions are
  * YYYY.MM.N, N counting from 0 within the month; the checksum is SHA-256 of the canonical JSON of
@@ -40,31 +78,11 @@ export function createReleaseService(knex: Knex, alloys: AlloyRepository) {
       const json = canonicalJson(snapshot);
       const d = new Date();
       const month = `${d.getUTCFullYear()}.${String(d.getUTCMonth() + 1).padStart(2, '0')}`;
-      const [{ n }] = (await knex('releases')
-        .where('version', 'like', `${month}.%`)
-        .count({ n: '*' })) as [{ n: number }];
-      const version = `${month}.${Number(n)}`;
-      const last = await knex('releases').orderBy('id', 'desc').first();
-      const changelog = await knex('revisions')
-        .where({ status: 'approved' })
-        .modify((q) => (last ? q.where('reviewed_at', '>', last.created_at) : q))
-        .select('id', 'kind', 'alloy_slug', 'reason', 'reviewed_at')
-        .orderBy('id');
-      await knex('releases').insert({
-        version,
-        created_at: d.toISOString(),
-        created_by: userId,
-        checksum: sha256(json),
-        snapshot_json: json,
-        changelog_json: JSON.stringify(
-          changelog.map((c: Record<string, unknown>) => ({
-            revisionId: c.id,
-            kind: c.kind,
-            alloy: c.alloy_slug,
-            reason: c.reason,
-            approvedAt: c.reviewed_at,
-          })),
-        ),
+      // The next number of the month is read and taken in one serialised transaction, so two
+      // curators publishing at once get .0 and .1, not a conflict.
+      const version = await knex.transaction(async (trx) => {
+        await serializeWith(trx, 'releases');
+        return insertRelease(trx, userId, d, month, json);
       });
       return this.get(version);
     },

@@ -11,7 +11,10 @@ export interface paths {
             path?: never;
             cookie?: never;
         };
-        /** Service and database status */
+        /**
+         * Service and database status
+         * @description For a load balancer's health and readiness checks: 200 only when this instance's database answers a query now; 503 (problem) when it does not, so the proxy stops sending requests here until it does.
+         */
         get: operations["getHealth"];
         put?: never;
         post?: never;
@@ -945,6 +948,11 @@ export interface components {
             /** @enum {string} */
             status: "ok";
             version: string;
+            /**
+             * @description Which database this instance serves from (it answered a query just now).
+             * @enum {string}
+             */
+            database: "sqlite" | "postgres";
             /** @description Published alloys in the table. */
             alloys: number;
         };
@@ -1756,6 +1764,7 @@ export interface components {
         ExportFormat: "json" | "csv" | "c";
         /** @description Read the table as this release froze it (e.g. 2026.12.0). */
         Release: string;
+        /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
         Id: number;
     };
     requestBodies: never;
@@ -1782,6 +1791,7 @@ export interface operations {
                     "application/json": components["schemas"]["Health"];
                 };
             };
+            503: components["responses"]["Problem"];
             default: components["responses"]["Problem"];
         };
     };
@@ -2351,6 +2361,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2372,6 +2383,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2450,6 +2462,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2680,6 +2693,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2703,6 +2717,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2976,6 +2991,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -2999,6 +3015,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -3020,6 +3037,7 @@ export interface operations {
             query?: never;
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;
@@ -3065,6 +3083,7 @@ export interface operations {
             };
             header?: never;
             path: {
+                /** @description A row id; ids are 32-bit integers on either database (SQLite or PostgreSQL). */
                 id: components["parameters"]["Id"];
             };
             cookie?: never;

@@ -17,6 +17,7 @@ describe('GET /api/v1/health', () => {
     expect(res.body).toEqual({
       status: 'ok',
       version: expect.any(String),
+      database: process.env.DATABASE_URL?.startsWith('postgres') ? 'postgres' : 'sqlite',
       alloys: expect.any(Number),
     });
     expect(res.body.alloys).toBeGreaterThanOrEqual(45);
@@ -27,6 +28,15 @@ describe('GET /api/v1/health', () => {
     expect(res.headers['x-powered-by']).toBeUndefined();
     expect(res.headers['x-content-type-options']).toBe('nosniff');
     expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+  });
+
+  it('database gone → 503 problem, so a proxy takes the instance out of rotation', async () => {
+    const gone = await createTestApp();
+    await gone.knex.destroy();
+    const res = await request(gone.app).get('/api/v1/health');
+    expect(res.status).toBe(503);
+    expect(res.type).toBe('application/problem+json');
+    expect(res.body.detail).toBe('The database does not answer.');
   });
 
   it('unknown query parameter → 400 problem naming it', async () => {

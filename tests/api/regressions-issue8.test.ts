@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createEstimatePool, type EstimatePool } from '../../backend/estimates/pool';
 import { signedIn } from '../helpers/access';
-import { createTestApp, type TestApp } from '../helpers/test-app';
+import { createTestApp, TEST_PUBLIC_URL, type TestApp } from '../helpers/test-app';
 
 /**
  * Issue 8, item 5 ("Zero 5xx from any input"): each request below once answered 500, or a 200
@@ -119,6 +119,29 @@ describe('issue 8 reproducers: once 5xx, now a 4xx naming the field', () => {
     ['/alloys?offset=1e999', '/query/offset'],
   ])('5. GET %s: 400 on %s (all but NaN were 500)', async (url, path) => {
     expectProblem(await request(t.app).get(`/api/v1${url}`), 400, path);
+  });
+
+  it.each([
+    ['get', '/revisions/Infinity'],
+    ['delete', '/keys/NaN'],
+    ['get', '/revisions/1e999'],
+  ] as const)(
+    '5a. %s %s: 400 on /params/id (on PostgreSQL the id reached a query and failed: 500)',
+    async (method, url) => {
+      expectProblem(await admin[method](`/api/v1${url}`), 400, '/params/id');
+    },
+  );
+
+  it('5a2. an id past 32 bits: 400 on /params/id, as on PostgreSQL integer columns', async () => {
+    expectProblem(await admin.get('/api/v1/revisions/2147483648'), 400, '/params/id');
+  });
+
+  it('5a3. text with a NUL character: 400 naming the field (PostgreSQL cannot store it)', async () => {
+    const res = await request(t.app)
+      .post('/api/v1/auth/sign-in')
+      .set('Origin', TEST_PUBLIC_URL)
+      .send({ email: '\u0000', password: '' });
+    expectProblem(res, 400, '/body/email');
   });
 
   it('5b. POST /match with 1e999 in the JSON (Infinity after JSON.parse): 400 on /body/conductivity/value saying "finite" (was "must be number")', async () => {

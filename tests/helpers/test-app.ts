@@ -7,6 +7,7 @@ import { createEstimatePool, type EstimatePool } from '../../backend/estimates/p
 import { prepareDatabase } from '../../backend/db/prepare';
 import { createMailer, type LocalDelivery, type Mailer } from '../../backend/mail/mailer';
 import { createOutboxRepository } from '../../backend/mail/outbox-repository';
+import { createTestPostgresDatabase, testPostgresUrl } from './test-database';
 
 export const TEST_PUBLIC_URL = 'http://conductory.test';
 
@@ -34,8 +35,16 @@ export function mailCapture() {
   return { sent, localDelivery, tokenFor };
 }
 
-/** A migrated, seeded in-memory database (reference table, demo scenario, demo accounts). */
+/**
+ * A migrated, seeded database of its own (reference table, demo scenario, demo accounts): in
+ * memory on SQLite, or a new PostgreSQL database when DATABASE_URL is one (npm run test:pg).
+ */
 export async function createTestDatabase(options: { accounts?: boolean } = {}): Promise<Knex> {
+  if (testPostgresUrl) {
+    const url = await createTestPostgresDatabase(options.accounts ?? false);
+    // No idle connections kept: a test file makes many small databases and rarely closes them.
+    return createKnex(url, { min: 0, max: 4 });
+  }
   const knex = createKnex(':memory:');
   await prepareDatabase(knex, { demo: true, demoAccounts: options.accounts ?? false });
   return knex;
@@ -61,12 +70,13 @@ const testPool = () => (sharedPool ??= createEstimatePool());
 export async function createTestApp(
   overrides: Partial<AppOptions> & { accounts?: boolean } = {},
 ): Promise<TestApp> {
-  const knex = await createTestDatabase({ accounts: overrides.accounts });
+  // A database of its own unless the test gives one (two instances on one database: tests/pg).
+  const knex = overrides.knex ?? (await createTestDatabase({ accounts: overrides.accounts }));
   const mail = mailCapture();
   const mailer = await createMailer(createOutboxRepository(knex), undefined, {
     localDelivery: mail.localDelivery,
   });
-  const jwtSecret = crypto.randomBytes(32);
+  const jwtSecret = overrides.jwtSecret ?? crypto.randomBytes(32);
   const app = createApp({
     knex,
     mailer,
