@@ -78,9 +78,10 @@ function checkRequest(req: Request): {
     );
   if (req.query.plan !== undefined) {
     const plan = req.query.plan;
-    if (typeof plan !== 'string' || !/^[1-9]\d{0,9}$/.test(plan))
+    // Ids are 32-bit integers on both databases (PostgreSQL refuses a larger one with an error).
+    if (typeof plan !== 'string' || !/^[1-9]\d{0,9}$/.test(plan) || Number(plan) > 2147483647)
       throw new ProblemError(400, 'Bad request', 'plan is the id of a saved sort plan', [
-        { path: '/query/plan', message: 'a positive integer' },
+        { path: '/query/plan', message: 'a positive integer up to 2147483647' },
       ]);
   }
   const accepted = req.accepts(Object.keys(FORMATS));
