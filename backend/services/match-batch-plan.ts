@@ -9,7 +9,7 @@ import {
 import { formatCelsius } from '../../shared/match/format';
 import { quantityToSI, type Quantity } from '../../shared/units/quantity';
 import type { SortPlanRow } from '../db/sort-plan-repository';
-import { streamBatchLines, type BatchReadings } from './match-batch';
+import { readingAt, streamBatchLines, type BatchReadings } from './match-batch';
 import type { SortPlanAnswer } from './sort-plans';
 
 /** What a batch needs of a saved plan: its windows per frequency and the range they span. */
@@ -115,19 +115,8 @@ export function batchPlanLine(
   i: number,
   classify: ReturnType<typeof createPlanClassifier>,
 ): BatchPlanLine {
-  const row = batch.rows[i]!;
-  const id = batch.ids[i]!;
-  const error = batch.errors.get(i);
-  if (error !== undefined) return { row, id, status: 'error', error };
-  const density = batch.density[i]!;
-  const frequency = batch.frequency[i]!;
-  const reading = {
-    conductivitySPerM: batch.conductivity[i]!,
-    temperatureK: batch.temperature[i]!,
-    densityKgPerM3: Number.isNaN(density) ? null : density,
-    frequencyHz: Number.isNaN(frequency) ? null : frequency,
-    uncertaintyPercent: batch.uncertainty[i]!,
-  };
+  const { row, id, error, reading } = readingAt(batch, i);
+  if (reading === null) return { row, id, status: 'error', error };
   const c = classify(reading);
   return {
     row,

@@ -530,16 +530,15 @@ export function createBatchMatcher(alloys: AlloyRecord[]) {
 /** Rows matched between two turns of the event loop: small enough to leave room for others. */
 const ROWS_PER_SLICE = 500;
 
-/** The answer line of reading i. */
-export function batchLine(
-  batch: BatchReadings,
-  i: number,
-  rank: ReturnType<typeof createBatchMatcher>,
-): BatchLine {
+/**
+ * Reading i as both answers report it: its row, its id, and either its error or the reading (a
+ * missing density or frequency, stored as NaN in the columns, becomes null).
+ */
+export function readingAt(batch: BatchReadings, i: number) {
   const row = batch.rows[i]!;
   const id = batch.ids[i]!;
   const error = batch.errors.get(i);
-  if (error !== undefined) return { row, id, status: 'error', error };
+  if (error !== undefined) return { row, id, error, reading: null } as const;
   const density = batch.density[i]!;
   const frequency = batch.frequency[i]!;
   const reading = {
@@ -549,6 +548,17 @@ export function batchLine(
     frequencyHz: Number.isNaN(frequency) ? null : frequency,
     uncertaintyPercent: batch.uncertainty[i]!,
   };
+  return { row, id, error: undefined, reading } as const;
+}
+
+/** The answer line of reading i. */
+export function batchLine(
+  batch: BatchReadings,
+  i: number,
+  rank: ReturnType<typeof createBatchMatcher>,
+): BatchLine {
+  const { row, id, error, reading } = readingAt(batch, i);
+  if (reading === null) return { row, id, status: 'error', error };
   const candidates = rank({
     conductivitySPerM: reading.conductivitySPerM,
     temperatureK: reading.temperatureK,

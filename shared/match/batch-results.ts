@@ -38,7 +38,8 @@ export type BatchLine =
     }
   | { row: number; id: string | null; status: 'error'; error: string };
 
-export const BATCH_CSV_COLUMNS: readonly string[] = [
+/** The columns both batch answers open with: the row, its status and the reading as read. */
+const READING_CSV_COLUMNS = [
   'row',
   'id',
   'status',
@@ -48,6 +49,10 @@ export const BATCH_CSV_COLUMNS: readonly string[] = [
   'temperature_k',
   'density_kg_per_m3',
   'frequency_hz',
+] as const;
+
+export const BATCH_CSV_COLUMNS: readonly string[] = [
+  ...READING_CSV_COLUMNS,
   ...Array.from({ length: BATCH_CANDIDATES }, (_, i) =>
     ['slug', 'name', 'uns', 'score'].map((f) => `candidate_${i + 1}_${f}`),
   ).flat(),
@@ -125,15 +130,7 @@ export type BatchPlanLine =
   | { row: number; id: string | null; status: 'error'; error: string };
 
 export const BATCH_PLAN_CSV_COLUMNS: readonly string[] = [
-  'row',
-  'id',
-  'status',
-  'error',
-  'conductivity_s_per_m',
-  'conductivity_percent_iacs',
-  'temperature_k',
-  'density_kg_per_m3',
-  'frequency_hz',
+  ...READING_CSV_COLUMNS,
   'plan_frequency_hz',
   'frequency_from',
   'product',
