@@ -1,9 +1,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import cookieParser from 'cookie-parser';
-import express, { type Express } from 'express';
+import express, { type Express, type RequestHandler, type Router } from 'express';
 import * as OpenApiValidator from 'express-openapi-validator';
-import helmet from 'helmet';
 import type { Knex } from 'knex';
 import type { DestinationStream } from 'pino';
 import compression from 'compression';
@@ -21,6 +20,9 @@ import {
   type EstimateLimits,
 } from './http/estimate-rate-limit';
 import { requestLog } from './http/request-log';
+import { securityHeaders } from './http/security-headers';
+import { dispatchByOperation } from './http/dispatch-operation';
+import { chain } from './http/chain';
 import { resolveOperation } from './http/resolve-operation';
 import { createEstimatePool, type EstimatePool } from './estimates/pool';
 import {
@@ -86,6 +88,11 @@ export interface AppOptions {
   estimatePool?: EstimatePool;
   /** Calculations per minute by caller, on top of rateLimits. */
   estimateLimits?: Partial<EstimateLimits>;
+  /**
+   * Check each answer against openapi.yaml before it leaves (a mismatch is a 500 naming the
+   * field). On unless production: the tests always turn it on.
+   */
+  validateResponses?: boolean;
   /** Serve the built front end from dist/client when it exists (off for API-only tests). */
   serveClient?: boolean;
   /**
@@ -125,26 +132,37 @@ export function createApp(options: AppOptions): Express {
   const app = express();
 
   app.disable('x-powered-by');
+  const validateResponses = options.validateResponses ?? !production;
+  // Read by sendPreparedJson: a cached answer goes through res.json where answers are checked.
+  app.locals.validateResponses = validateResponses;
   app.set('trust proxy', options.trustProxy ?? false);
   // /api/v1/Users and /api/v1/users/ are not /api/v1/users (and routers say the same below).
   app.set('case sensitive routing', true);
   app.set('strict routing', true);
   // Array query parameters (?family=a&family=b) need the extended parser (validator docs).
   app.set('query parser', 'extended');
+  // Every request, as one layer: security headers, its log line, compression, and (under /api/v1)
+  // the operation of openapi.yaml it resolves to, or a 404/405 before anything else runs.
   app.use(
-    helmet({
-      // Plain-HTTP loopback deployments must not be told to upgrade every request to HTTPS.
-      contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
-    }),
+    chain([
+      securityHeaders({
+        // Plain-HTTP loopback deployments must not be told to upgrade every request to HTTPS.
+        contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } },
+      }),
+      requestLog(app, options.logLevel ?? 'silent', options.logStream),
+      // gzip or brotli, as the client accepts, for the API and the front end's files alike.
+      compression(),
+      resolveOperation(apiDocument),
+    ]),
   );
-  app.use(requestLog(options.logLevel ?? 'silent', options.logStream));
-  // gzip or brotli, as the client accepts, for the API and the front end's files alike.
-  app.use(compression());
-  // Before any handler: a request under /api/v1 is one operation of openapi.yaml, or a 404/405.
-  app.use(resolveOperation(apiDocument));
-  app.use('/api', express.json({ limit: JSON_BODY_LIMIT }));
-  // Infinity, NaN and 1e999 never reach the validator's coercion or a handler (400, field named).
-  app.use('/api', refuseNonFinite);
+  app.use(
+    '/api',
+    chain([
+      express.json({ limit: JSON_BODY_LIMIT }),
+      // Infinity, NaN and 1e999 never reach the validator's coercion or a handler (400, field named).
+      refuseNonFinite,
+    ]),
+  );
 
   // Swagger UI goes before the validator, which would otherwise refuse its undocumented paths.
   app.use(apiReference(loadApiDocument()));
@@ -152,39 +170,47 @@ export function createApp(options: AppOptions): Express {
     res.json(loadApiDocument());
   });
 
-  app.use(cookieParser());
   // Who is calling, how often, and whether openapi.yaml's x-roles let them: before validation,
   // so a caller without access learns nothing of the request rules.
   app.use(
     '/api/v1',
-    authenticate(repos, options.jwtSecret, production, options.publicOrigin),
-    apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }, stores),
-    countUsage(repos),
-    enforceRoles(),
-    estimateRateLimit({ ...DEFAULT_ESTIMATE_LIMITS, ...options.estimateLimits }, stores),
+    chain([
+      cookieParser(),
+      authenticate(repos, options.jwtSecret, production, options.publicOrigin),
+      apiRateLimit({ ...DEFAULT_RATE_LIMITS, ...options.rateLimits }, stores),
+      countUsage(repos),
+      enforceRoles(),
+      estimateRateLimit({ ...DEFAULT_ESTIMATE_LIMITS, ...options.estimateLimits }, stores),
+    ]),
   );
 
-  app.use(
-    OpenApiValidator.middleware({
-      apiSpec: apiDocument as never,
-      validateRequests: { allowUnknownQueryParameters: false },
-      validateResponses: true,
-      // Access is decided by enforceRoles from x-roles; the document's security block is for readers.
-      validateSecurity: false,
-      // The uploads are checked by multer (with limits) and their services instead: the
-      // validator's multipart path has no limits, and it would read a batch's body before its
-      // route could parse it as it streams (routes/match-batch.ts checks the query itself).
-      ignorePaths: /^\/(?!api\/v1\/)|^\/api\/v1\/imports\/?$|^\/api\/v1\/match\/batch$/,
-    }),
-  );
+  // The validator's own steps as one layer too.
+  const validator = OpenApiValidator.middleware({
+    apiSpec: apiDocument as never,
+    validateRequests: { allowUnknownQueryParameters: false },
+    // Every answer checked against openapi.yaml in development and in the tests (the API suites
+    // and the fuzz test); a production server skips it, about a tenth of a request's cost.
+    validateResponses,
+    // Access is decided by enforceRoles from x-roles; the document's security block is for readers.
+    validateSecurity: false,
+    // The uploads are checked by multer (with limits) and their services instead: the
+    // validator's multipart path has no limits, and it would read a batch's body before its
+    // route could parse it as it streams (routes/match-batch.ts checks the query itself).
+    ignorePaths: /^\/(?!api\/v1\/)|^\/api\/v1\/imports\/?$|^\/api\/v1\/match\/batch$/,
+    // Those two are the only multipart operations, so the validator's own upload step has
+    // nothing to do.
+    fileUploader: false,
+  });
+  app.use(chain(validator as unknown as RequestHandler[]));
 
-  const v1 = express.Router({ caseSensitive: true, strict: true });
-  v1.use(healthRouter(catalogue, knex, apiDocument.info.version));
+  // Each request goes straight to the router of the operation resolveOperation named.
+  const routers: Router[] = [];
+  routers.push(healthRouter(catalogue, knex, apiDocument.info.version));
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
-  // Before the alloys router: /alloys/export and /alloys/{slug}/history must win over /alloys/{slug}.
-  v1.use(curationRouter(curation, catalogue, releases, (entry) => repos.audit.record(entry)));
-  v1.use(
+  // /alloys/export and /alloys/{slug}/history are operations of their own, not /alloys/{slug}.
+  routers.push(curationRouter(curation, catalogue, releases, (entry) => repos.audit.record(entry)));
+  routers.push(
     alloysRouter(catalogue, releases, async (slug) => {
       const rows = await knex('measurements as m')
         .join('alloys as a', 'a.id', 'm.alloy_id')
@@ -202,15 +228,15 @@ export function createApp(options: AppOptions): Express {
       }));
     }),
   );
-  v1.use(matchRouter(catalogue));
-  v1.use(matchBatchRouter(catalogue, createSortPlanRepository(knex)));
-  v1.use(readingsRouter(createReadingRepository(knex)));
+  routers.push(matchRouter(catalogue));
+  routers.push(matchBatchRouter(catalogue, createSortPlanRepository(knex)));
+  routers.push(readingsRouter(createReadingRepository(knex)));
   const stacks = createStackRepository(knex);
   const estimatePool = options.estimatePool ?? createEstimatePool();
-  v1.use(stacksRouter(stacks, catalogue));
-  v1.use(estimatesRouter(catalogue, estimatePool));
-  v1.use(checksRouter(createChecksService(estimatePool, catalogue)));
-  v1.use(
+  routers.push(stacksRouter(stacks, catalogue));
+  routers.push(estimatesRouter(catalogue, estimatePool));
+  routers.push(checksRouter(createChecksService(estimatePool, catalogue)));
+  routers.push(
     sortPlansRouter({
       catalogue,
       releases,
@@ -219,11 +245,13 @@ export function createApp(options: AppOptions): Express {
       pool: estimatePool,
     }),
   );
-  v1.use(authRouter(accounts, credentialThrottles(credentials, undefined, stores), production));
-  v1.use(meRouter(repos));
-  v1.use(keysRouter(keys, repos));
-  v1.use(adminRouter(repos, keys, outbox));
-  app.use('/api/v1', v1);
+  routers.push(
+    authRouter(accounts, credentialThrottles(credentials, undefined, stores), production),
+  );
+  routers.push(meRouter(repos));
+  routers.push(keysRouter(keys, repos));
+  routers.push(adminRouter(repos, keys, outbox));
+  app.use('/api/v1', dispatchByOperation(routers, apiDocument));
   app.use('/api', apiNotFound);
 
   if (options.serveClient !== false && fs.existsSync(path.join(clientDist, 'index.html')))

@@ -18,6 +18,12 @@ import { heaviestLaunch } from '../tests/helpers/launches';
 import { productCases, type BenchPorts, type ProductCase } from './cases';
 
 const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
+/**
+ * Each side-by-side figure is the sum of this many short runs taken in turn (bare Express, the
+ * product, bare Express…): a shared machine's speed drifts by tens of percent over a minute, and
+ * taking the two in alternation keeps that drift out of their ratio.
+ */
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 4);
 const CONNECTIONS = 10;
 /** The overload check: many connections for a long while, counting errors (issue 13: 0 in 30 s). */
 const MANY_CONNECTIONS = 100;
@@ -63,18 +69,61 @@ async function load(
   };
 }
 
-// Side by side in one run: each case on node:http, on bare Express, then on the product.
+/** Several runs of one server and case, alternated with others by the caller, as one row. */
+class Rounds {
+  private requests = 0;
+  private seconds = 0;
+  private p99s: number[] = [];
+  private p50s: number[] = [];
+  private errors = 0;
+  constructor(readonly name: string) {}
+  add(result: autocannon.Result) {
+    this.requests += result.requests.total;
+    this.seconds += result.duration;
+    this.p99s.push(result.latency.p99);
+    this.p50s.push(result.latency.p50);
+    this.errors += result.errors + result.timeouts + result.non2xx;
+  }
+  row(): Row {
+    const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+    return {
+      name: this.name,
+      rps: this.requests / this.seconds,
+      p50: median(this.p50s),
+      p99: median(this.p99s),
+      errors: this.errors,
+    };
+  }
+}
+
+async function once(port: number, c: ProductCase, urlPath: string, duration: number) {
+  return autocannon({
+    url: `http://127.0.0.1:${port}${urlPath}`,
+    method: c.method,
+    connections: CONNECTIONS,
+    duration,
+    headers: c.body ? { 'content-type': 'application/json' } : {},
+    body: c.body ? JSON.stringify(c.body) : undefined,
+  });
+}
+
+// Side by side in one run: each case on node:http, then bare Express and the product in turns.
 const groups: Array<{ c: ProductCase; node: Row; express: Row; product: Row }> = [];
+const roundSeconds = Math.max(1, Math.round(DURATION_S / ROUNDS));
 for (const c of productCases) {
-  const node = await load(`node:http, ${c.key} bytes`, ports.node, c, `/bare/${c.key}`);
-  const bareExpress = await load(
-    `bare Express, ${c.key} bytes`,
-    ports.express,
-    c,
-    `/bare/${c.key}`,
-  );
-  const product = await load(c.name, ports.product, c, c.path);
-  groups.push({ c, node, express: bareExpress, product });
+  process.stdout.write(`  ${c.name}: node:http, then bare Express and the product in turns…\n`);
+  const node = new Rounds('node:http');
+  const bare = new Rounds('bare Express');
+  const product = new Rounds(c.name);
+  node.add(await once(ports.node, c, `/bare/${c.key}`, DURATION_S));
+  // Warm both up (the JIT, the product's caches) before anything is counted.
+  await once(ports.express, c, `/bare/${c.key}`, 1);
+  await once(ports.product, c, c.path, 1);
+  for (let i = 0; i < ROUNDS; i++) {
+    bare.add(await once(ports.express, c, `/bare/${c.key}`, roundSeconds));
+    product.add(await once(ports.product, c, c.path, roundSeconds));
+  }
+  groups.push({ c, node: node.row(), express: bare.row(), product: product.row() });
 }
 const overload: Row[] = [];
 for (const c of productCases.filter((x) => x.key !== 'filter'))
@@ -136,7 +185,9 @@ servers.disconnect();
 const row = (r: Row, ratios: string) =>
   `${r.name.padEnd(40)} ${r.rps.toFixed(0).padStart(8)} ${r.p50.toFixed(1).padStart(8)} ${r.p99.toFixed(1).padStart(8)} ${String(r.errors).padStart(7)}   ${ratios}`;
 console.log(
-  `\nautocannon, ${CONNECTIONS} connections, ${DURATION_S} s each, loopback, no compression asked`,
+  `\nautocannon, ${CONNECTIONS} connections, loopback, no compression asked; node:http ${DURATION_S} s, ` +
+    `bare Express and the product ${ROUNDS} × ${roundSeconds} s each in turns; ` +
+    'the product as NODE_ENV=production runs it (answers not re-validated against openapi.yaml)',
 );
 console.log(
   'case                                        req/s   p50 ms   p99 ms  errors   ratio to bare Express / to node:http',

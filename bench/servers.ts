@@ -35,6 +35,9 @@ const product = createApp({
   jwtSecret: crypto.randomBytes(32),
   publicUrl: () => 'http://127.0.0.1',
   serveClient: false,
+  // As a deployment runs it (NODE_ENV=production): answers are not re-validated against
+  // openapi.yaml there; development and the tests do validate them.
+  production: true,
   logLevel: process.env.LOG_LEVEL ?? 'info',
   rateLimits: unlimited,
   estimateLimits: unlimited,

@@ -5,6 +5,8 @@ import { ProblemError } from './problem';
 
 /** The operation of openapi.yaml that a request resolved to, and who may call it. */
 export interface ResolvedOperation {
+  /** `METHOD /template`, e.g. `POST /keys/{id}/rotate`: one per operation of openapi.yaml. */
+  id: string;
   method: string;
   /** The path as written in openapi.yaml, e.g. /keys/{id}/rotate. */
   template: string;
@@ -53,6 +55,7 @@ export function operationTable(doc: ApiDocument): Route[] {
       if (!o['x-roles'])
         throw new Error(`openapi.yaml: ${method.toUpperCase()} ${template} has no x-roles`);
       operations.set(method.toUpperCase(), {
+        id: `${method.toUpperCase()} ${template}`,
         method: method.toUpperCase(),
         template,
         roles: o['x-roles'],

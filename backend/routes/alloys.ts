@@ -1,6 +1,7 @@
 import { Router, type Request } from 'express';
 import type { AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { ProblemError } from '../http/problem';
+import { sendPreparedJson } from '../http/send-prepared-json';
 import type { CatalogueQuery, CatalogueItem } from '../services/catalogue';
 import type { CatalogueStore } from '../services/catalogue-store';
 import type { ReleaseService } from '../services/releases';
@@ -62,7 +63,7 @@ export function alloysRouter(
 
   router.get('/alloys', async (req, res) => {
     const table = await tableFor(req);
-    res.json(table.search(parseQuery(req)));
+    sendPreparedJson(req, res, table.searchAnswer(parseQuery(req)));
   });
 
   router.get('/alloys/:slug', async (req, res) => {

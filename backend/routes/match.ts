@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { Quantity } from '../../shared/units/quantity';
 import { siFromRequest } from '../http/quantity';
-import { matchReading } from '../services/match';
+import { matchPrepared } from '../services/match';
 import type { CatalogueStore } from '../services/catalogue-store';
 
 interface MatchBody {
@@ -27,7 +27,7 @@ export function matchRouter(catalogue: CatalogueStore): Router {
       uncertaintyPercent: body.uncertaintyPercent ?? 2,
     };
     const table = await catalogue.get();
-    const candidates = matchReading(table.all(), reading, body.limit ?? 10);
+    const candidates = matchPrepared(table.matchTable(), reading, body.limit ?? 10);
     res.json({
       reading: {
         conductivitySPerM: reading.conductivitySPerM,

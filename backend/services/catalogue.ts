@@ -1,7 +1,10 @@
 import { restsOnMemory, valueOf, type AlloyRecord } from '../../shared/catalogue/alloy-record';
 import { AlloySearch } from '../../shared/catalogue/search';
+import type { AlloyScoring } from '../../shared/match/score';
 import { isResistivityUnit, percentIacs, toSiemensPerMetre } from '../../shared/units/conductivity';
 import { toKilogramsPerCubicMetre } from '../../shared/units/density';
+import type { PreparedJson } from '../http/send-prepared-json';
+import { prepareMatch } from './match';
 
 export type SortKey = 'relevance' | 'name' | 'uns' | 'family' | 'conductivity' | 'density';
 
@@ -38,6 +41,11 @@ export interface CataloguePage {
   total: number;
   limit: number;
   offset: number;
+}
+
+/** A search's answer as the API sends it: the page, and its JSON bytes made once. */
+export interface SearchAnswer extends PreparedJson {
+  page: CataloguePage;
 }
 
 interface Indexed {
@@ -83,6 +91,9 @@ export class Catalogue {
   private readonly index: AlloySearch;
   /** Hits per search text: the table is immutable for this object's life, so they never go stale. */
   private readonly hitCache = new Map<string, CatalogueItem[]>();
+  private prepared: AlloyScoring[] | undefined;
+  /** Answers per query (its parsed form), newest last; the table never changes under them. */
+  private readonly answers = new Map<string, SearchAnswer>();
 
   constructor(records: AlloyRecord[]) {
     this.entries = records.map((record) => ({ record, item: toItem(record) }));
@@ -103,6 +114,11 @@ export class Catalogue {
     return this.entries.map((e) => e.record);
   }
 
+  /** The table prepared for Match (services/match.ts), once for this table's life. */
+  matchTable(): AlloyScoring[] {
+    return (this.prepared ??= prepareMatch(this.all()));
+  }
+
   private hits(text: string): CatalogueItem[] {
     const key = text.toLowerCase();
     let hits = this.hitCache.get(key);
@@ -113,6 +129,27 @@ export class Catalogue {
       this.hitCache.set(key, hits);
     }
     return hits;
+  }
+
+  /**
+   * {@link search}'s answer with its JSON bytes, kept for the last few hundred queries: a
+   * sorting line's operators repeat the same searches, and turning a page into JSON cost more than
+   * finding it (issue 13's profile).
+   */
+  searchAnswer(query: CatalogueQuery): SearchAnswer {
+    const key = JSON.stringify(query);
+    let answer = this.answers.get(key);
+    if (answer) {
+      // Most recently used last, so the oldest is the one dropped.
+      this.answers.delete(key);
+    } else {
+      const page = this.search(query);
+      answer = { page, bytes: Buffer.from(JSON.stringify(page)) };
+      if (this.answers.size >= ANSWER_CACHE_SIZE)
+        this.answers.delete(this.answers.keys().next().value!);
+    }
+    this.answers.set(key, answer);
+    return answer;
   }
 
   search(query: CatalogueQuery): CataloguePage {
@@ -139,6 +176,8 @@ export class Catalogue {
 
 /** Most searches repeat (a sorter's operators type the same few names); keep the last few hundred. */
 const HIT_CACHE_SIZE = 256;
+/** Kept answers: a page is a few kB, so a few MB at most. */
+const ANSWER_CACHE_SIZE = 256;
 
 /** Range filters in the unit the caller gave; a resistivity range turns around in conductivity. */
 function matchesFilters(item: CatalogueItem, query: CatalogueQuery): boolean {

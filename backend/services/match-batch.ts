@@ -9,8 +9,7 @@ import {
   type BatchLine,
 } from '../../shared/match/batch-results';
 import { formatCelsius } from '../../shared/match/format';
-import { alloyScoring, scorePrepared, type AlloyScoring } from '../../shared/match/score';
-import { baseMetalsFrom } from '../../shared/match/temperature-estimate';
+import { scorePrepared } from '../../shared/match/score';
 import {
   canonicalUnit,
   conductivityUnits,
@@ -27,7 +26,7 @@ import {
   withinLinearLawRange,
 } from '../../shared/units/temperature-correction';
 import { ProblemError } from '../http/problem';
-import { MIN_SCORE } from './match';
+import { MIN_SCORE, prepareMatch } from './match';
 
 /** Readings per batch: a sorting line's day is some tens of thousands. */
 export const MAX_BATCH_ROWS = 100_000;
@@ -492,10 +491,7 @@ export function readBatch(source: Readable): Promise<BatchReadings> {
  * costs arithmetic only (scorePrepared), no reasons in words.
  */
 export function createBatchMatcher(alloys: AlloyRecord[]) {
-  const bases = baseMetalsFrom(alloys);
-  const prepared = alloys
-    .map((a) => alloyScoring(a, bases))
-    .filter((s): s is AlloyScoring => s !== null);
+  const prepared = prepareMatch(alloys);
   const better = (a: BatchCandidate, b: BatchCandidate) =>
     b.score - a.score || a.name.localeCompare(b.name);
   return function rank(reading: {

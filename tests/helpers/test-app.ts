@@ -85,6 +85,8 @@ export async function createTestApp(
     // Cookie writes must come from here: tests/helpers/access.ts sends it as Origin.
     publicOrigin: TEST_PUBLIC_URL,
     serveClient: false,
+    // Every answer of every API test is checked against openapi.yaml, whatever the mode.
+    validateResponses: true,
     estimatePool: overrides.estimatePool ?? testPool(),
     rateLimits: {
       visitor: 100_000,
