@@ -166,8 +166,10 @@ export function createApp(options: AppOptions): Express {
 
   // Swagger UI goes before the validator, which would otherwise refuse its undocumented paths.
   app.use(apiReference(loadApiDocument()));
+  // The document as JSON, made once (loadApiDocument hands out a deep copy on every call).
+  const documentJson = JSON.stringify(loadApiDocument());
   app.get('/api/openapi.json', (_req, res) => {
-    res.json(loadApiDocument());
+    res.type('application/json').send(documentJson);
   });
 
   // Who is calling, how often, and whether openapi.yaml's x-roles let them: before validation,
@@ -203,54 +205,45 @@ export function createApp(options: AppOptions): Express {
   });
   app.use(chain(validator as unknown as RequestHandler[]));
 
-  // Each request goes straight to the router of the operation resolveOperation named.
-  const routers: Router[] = [];
-  routers.push(healthRouter(catalogue, knex, apiDocument.info.version));
   const releases = createReleaseService(knex, alloyRepository);
   const curation = createCurationService(knex, repos, options.mailer, catalogue);
-  // /alloys/export and /alloys/{slug}/history are operations of their own, not /alloys/{slug}.
-  routers.push(curationRouter(curation, catalogue, releases, (entry) => repos.audit.record(entry)));
-  routers.push(
-    alloysRouter(catalogue, releases, async (slug) => {
-      const rows = await knex('measurements as m')
-        .join('alloys as a', 'a.id', 'm.alloy_id')
-        .join('sources as s', 's.id', 'm.source_id')
-        .where('a.slug', slug)
-        .select('m.*', 's.citation', 's.kind');
-      return rows.map((m) => ({
-        conductivitySPerM: m.conductivity_s_per_m,
-        frequencyHz: m.frequency_hz,
-        temperatureK: m.temperature_k,
-        uncertaintyPercent: m.uncertainty_percent,
-        sample: m.sample,
-        instrument: m.instrument,
-        source: { id: m.source_id, citation: m.citation, kind: m.kind },
-      }));
-    }),
-  );
-  routers.push(matchRouter(catalogue));
-  routers.push(matchBatchRouter(catalogue, createSortPlanRepository(knex)));
-  routers.push(readingsRouter(createReadingRepository(knex)));
   const stacks = createStackRepository(knex);
+  const sortPlans = createSortPlanRepository(knex);
   const estimatePool = options.estimatePool ?? createEstimatePool();
-  routers.push(stacksRouter(stacks, catalogue));
-  routers.push(estimatesRouter(catalogue, estimatePool));
-  routers.push(checksRouter(createChecksService(estimatePool, catalogue)));
-  routers.push(
-    sortPlansRouter({
-      catalogue,
-      releases,
-      stacks,
-      plans: createSortPlanRepository(knex),
-      pool: estimatePool,
-    }),
-  );
-  routers.push(
+  const measurementsOf = async (slug: string) => {
+    const rows = await knex('measurements as m')
+      .join('alloys as a', 'a.id', 'm.alloy_id')
+      .join('sources as s', 's.id', 'm.source_id')
+      .where('a.slug', slug)
+      .select('m.*', 's.citation', 's.kind');
+    return rows.map((m) => ({
+      conductivitySPerM: m.conductivity_s_per_m,
+      frequencyHz: m.frequency_hz,
+      temperatureK: m.temperature_k,
+      uncertaintyPercent: m.uncertainty_percent,
+      sample: m.sample,
+      instrument: m.instrument,
+      source: { id: m.source_id, citation: m.citation, kind: m.kind },
+    }));
+  };
+  // Each request goes straight to the router of the operation resolveOperation named.
+  // /alloys/export and /alloys/{slug}/history are operations of their own, not /alloys/{slug}.
+  const routers: Router[] = [
+    healthRouter(catalogue, knex, apiDocument.info.version),
+    curationRouter(curation, catalogue, releases, (entry) => repos.audit.record(entry)),
+    alloysRouter(catalogue, releases, measurementsOf),
+    matchRouter(catalogue),
+    matchBatchRouter(catalogue, sortPlans),
+    readingsRouter(createReadingRepository(knex)),
+    stacksRouter(stacks, catalogue),
+    estimatesRouter(catalogue, estimatePool),
+    checksRouter(createChecksService(estimatePool, catalogue)),
+    sortPlansRouter({ catalogue, releases, stacks, plans: sortPlans, pool: estimatePool }),
     authRouter(accounts, credentialThrottles(credentials, undefined, stores), production),
-  );
-  routers.push(meRouter(repos));
-  routers.push(keysRouter(keys, repos));
-  routers.push(adminRouter(repos, keys, outbox));
+    meRouter(repos),
+    keysRouter(keys, repos),
+    adminRouter(repos, keys, outbox),
+  ];
   app.use('/api/v1', dispatchByOperation(routers, apiDocument));
   app.use('/api', apiNotFound);
 

@@ -94,11 +94,12 @@ export function requestLog(
     res.once('close', () => {
       const ms = Math.round(performance.now() - started);
       const status = res.statusCode;
-      const entry = { req: describe(req), res: { status }, responseTime: ms };
-      if (!res.writableFinished)
-        logger.warn(entry, `${req.method} ${pathOf(req)} closed by the client after ${ms} ms`);
-      else if (status >= 500) logger.error(entry, `${req.method} ${pathOf(req)} ${status} failed`);
-      else logger.info(entry, `${req.method} ${pathOf(req)} ${status} ${ms} ms`);
+      const request = describe(req);
+      const entry = { req: request, res: { status }, responseTime: ms };
+      const line = `${request.method} ${request.path}`;
+      if (!res.writableFinished) logger.warn(entry, `${line} closed by the client after ${ms} ms`);
+      else if (status >= 500) logger.error(entry, `${line} ${status} failed`);
+      else logger.info(entry, `${line} ${status} ${ms} ms`);
     });
     next();
   };
