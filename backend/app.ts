@@ -165,7 +165,8 @@ export function createApp(options: AppOptions): Express {
   );
 
   // Swagger UI goes before the validator, which would otherwise refuse its undocumented paths.
-  app.use(apiReference(loadApiDocument()));
+  // Mounted at its own prefix, so an API request passes it by one path check.
+  app.use('/api/docs', apiReference(loadApiDocument()));
   // The document as JSON, made once (loadApiDocument hands out a deep copy on every call).
   const documentJson = JSON.stringify(loadApiDocument());
   app.get('/api/openapi.json', (_req, res) => {

@@ -23,7 +23,7 @@ const DURATION_S = Number(process.env.BENCH_SECONDS ?? 5);
  * product, bare Express…): a shared machine's speed drifts by tens of percent over a minute, and
  * taking the two in alternation keeps that drift out of their ratio.
  */
-const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 4);
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 6);
 const CONNECTIONS = 10;
 /** The overload check: many connections for a long while, counting errors (issue 13: 0 in 30 s). */
 const MANY_CONNECTIONS = 100;
@@ -76,8 +76,11 @@ class Rounds {
   private p99s: number[] = [];
   private p50s: number[] = [];
   private errors = 0;
+  /** Each run's requests per second, in order: a round's ratio pairs it with the other server's. */
+  readonly rates: number[] = [];
   constructor(readonly name: string) {}
   add(result: autocannon.Result) {
+    this.rates.push(result.requests.total / result.duration);
     this.requests += result.requests.total;
     this.seconds += result.duration;
     this.p99s.push(result.latency.p99);
@@ -108,7 +111,14 @@ async function once(port: number, c: ProductCase, urlPath: string, duration: num
 }
 
 // Side by side in one run: each case on node:http, then bare Express and the product in turns.
-const groups: Array<{ c: ProductCase; node: Row; express: Row; product: Row }> = [];
+const groups: Array<{
+  c: ProductCase;
+  node: Row;
+  express: Row;
+  product: Row;
+  /** The product's rate over bare Express's in each round, lowest first. */
+  roundRatios: number[];
+}> = [];
 const roundSeconds = Math.max(1, Math.round(DURATION_S / ROUNDS));
 for (const c of productCases) {
   process.stdout.write(`  ${c.name}: node:http, then bare Express and the product in turns…\n`);
@@ -123,7 +133,8 @@ for (const c of productCases) {
     bare.add(await once(ports.express, c, `/bare/${c.key}`, roundSeconds));
     product.add(await once(ports.product, c, c.path, roundSeconds));
   }
-  groups.push({ c, node: node.row(), express: bare.row(), product: product.row() });
+  const roundRatios = product.rates.map((r, i) => r / bare.rates[i]!).sort((a, b) => a - b);
+  groups.push({ c, node: node.row(), express: bare.row(), product: product.row(), roundRatios });
 }
 const overload: Row[] = [];
 for (const c of productCases.filter((x) => x.key !== 'filter'))
@@ -206,6 +217,11 @@ for (const g of groups) {
       { ...g.product, name: '  the product' },
       `${(g.product.rps / g.express.rps).toFixed(2)} / ${(g.product.rps / g.node.rps).toFixed(2)}`,
     ),
+  );
+  const r = g.roundRatios;
+  console.log(
+    `  rounds: product / bare Express ${r.map((x) => x.toFixed(2)).join(' ')} ` +
+      `(median ${r[Math.floor(r.length / 2)]!.toFixed(2)})`,
   );
 }
 console.log(`\nThe product with ${MANY_CONNECTIONS} connections for ${LONG_S} s:`);

@@ -38,7 +38,7 @@ export function authenticate(
   /** PUBLIC_URL when configured: then the only origin a cookie write may come from. */
   publicOrigin?: string,
 ): RequestHandler {
-  return async (req, res, next) => {
+  const withCredentials: RequestHandler = async (req, res, next) => {
     const header = req.get('authorization');
     if (header !== undefined) {
       const m = /^Bearer\s+(\S+)$/i.exec(header);
@@ -116,5 +116,16 @@ export function authenticate(
       );
     }
     next();
+  };
+  return (req, res, next) => {
+    // Most requests carry neither a key nor a cookie: they are answered without a promise.
+    if (
+      req.headers.authorization === undefined &&
+      !(req.cookies as Record<string, string> | undefined)?.[SESSION_COOKIE]
+    ) {
+      req.principal = { kind: 'visitor', role: 'visitor' };
+      return next();
+    }
+    return withCredentials(req, res, next);
   };
 }

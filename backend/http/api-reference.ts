@@ -53,14 +53,13 @@ const HEADER_CSS = `
 .swagger-ui .info .title small.version-stamp { background: #1d5c3a; }
 `;
 
-/** Swagger UI over openapi.yaml at /api/docs, with our header; mounted before the validator. */
+/** Swagger UI over openapi.yaml, with our header: mounted at /api/docs, before the validator. */
 export function apiReference(doc: ApiDocument): Router {
   const router = express.Router();
-  router.get('/api/docs/header.js', (_req, res) => {
+  router.get('/header.js', (_req, res) => {
     res.type('text/javascript').send(HEADER_SCRIPT);
   });
   router.use(
-    '/api/docs',
     swaggerUi.serve,
     swaggerUi.setup(doc, {
       customSiteTitle: 'Conductory API reference',

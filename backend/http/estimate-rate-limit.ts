@@ -1,8 +1,9 @@
 import type { RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator } from 'express-rate-limit';
 import type { Caller } from '../auth/roles';
 import type { LimiterStores } from './knex-rate-limit-store';
 import { ProblemError } from './problem';
+import { windowLimiter } from './window-limiter';
 
 /**
  * Calculations per minute by caller, on top of the general limit: one launch costs as much CPU
@@ -25,25 +26,21 @@ export function estimateRateLimit(
   limits: EstimateLimits,
   stores: LimiterStores = () => undefined,
 ): RequestHandler {
-  const limiter = rateLimit({
+  const limiter = windowLimiter({
     store: stores('estimates'),
     windowMs: 60_000,
     limit: (req) => limits[req.principal.role],
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => {
+    key: (req) => {
       const p = req.principal;
       if (p.kind === 'key') return `estimates:key:${p.keyId}`;
       if (p.kind === 'session') return `estimates:user:${p.userId}`;
       return `estimates:ip:${ipKeyGenerator(req.ip ?? '')}`;
     },
-    handler: (_req, res, next) =>
-      next(
-        new ProblemError(
-          429,
-          'Too many requests',
-          `Calculations are limited for your role: try again in ${String(res.getHeader('retry-after') ?? 60)} s, or sign in or use an API key for a higher allowance.`,
-        ),
+    refuse: (_req, retryAfterS) =>
+      new ProblemError(
+        429,
+        'Too many requests',
+        `Calculations are limited for your role: try again in ${retryAfterS} s, or sign in or use an API key for a higher allowance.`,
       ),
   });
   return (req, res, next) =>

@@ -1,8 +1,9 @@
-import type { NextFunction, Request, RequestHandler, Response } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import type { Request, RequestHandler } from 'express';
+import { ipKeyGenerator } from 'express-rate-limit';
 import type { Caller } from '../auth/roles';
 import type { LimiterStores } from './knex-rate-limit-store';
 import { ProblemError } from './problem';
+import { windowLimiter } from './window-limiter';
 
 /** Requests per minute by caller; visitors are counted per address, the others per key or person. */
 export type RateLimits = Record<Caller, number>;
@@ -17,24 +18,22 @@ export const DEFAULT_RATE_LIMITS: RateLimits = {
 const tooMany = (retryAfterS: number) =>
   new ProblemError(429, 'Too many requests', `Slow down: try again in ${retryAfterS} s.`);
 
-/** One limiter for the API, with RateLimit headers (IETF draft 8) and Retry-After on 429. */
+/** One limiter for the API, with RateLimit headers (IETF draft 8) and Retry-After on 429 (window-limiter.ts). */
 export function apiRateLimit(
   limits: RateLimits,
   stores: LimiterStores = () => undefined,
 ): RequestHandler {
-  return rateLimit({
+  return windowLimiter({
     store: stores('api'),
     windowMs: 60_000,
     limit: (req) => limits[req.principal.role],
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => {
+    key: (req) => {
       const p = req.principal;
       if (p.kind === 'key') return `key:${p.keyId}`;
       if (p.kind === 'session') return `user:${p.userId}`;
       return `ip:${ipKeyGenerator(req.ip ?? '')}`;
     },
-    handler: (_req, res, next) => next(tooMany(Number(res.getHeader('retry-after') ?? 60))),
+    refuse: (_req, retryAfterS) => tooMany(retryAfterS),
   });
 }
 
@@ -71,34 +70,28 @@ export function credentialThrottles(
   stores: LimiterStores = () => undefined,
 ): RequestHandler[] {
   const ceiling = limits.perAccountCeiling ?? Math.max(100, 10 * limits.perAccount);
-  const common = {
-    windowMs,
-    standardHeaders: 'draft-8' as const,
-    legacyHeaders: false,
-    handler: (_r: Request, res: Response, next: NextFunction) =>
-      next(tooMany(Number(res.getHeader('retry-after') ?? 60))),
-  };
+  const common = { windowMs, refuse: (_req: Request, retryAfterS: number) => tooMany(retryAfterS) };
   const address = (req: Request) => `ip:${ipKeyGenerator(req.ip ?? '')}`;
   const account = (req: Request) =>
     `account:${String((req.body as { email?: unknown } | undefined)?.email ?? '').toLowerCase()}`;
   return [
-    rateLimit({
+    windowLimiter({
       ...common,
       store: stores('credentials-address'),
-      limit: limits.perAddress,
-      keyGenerator: address,
+      limit: () => limits.perAddress,
+      key: address,
     }),
-    rateLimit({
+    windowLimiter({
       ...common,
       store: stores('credentials-account-address'),
-      limit: limits.perAccount,
-      keyGenerator: (req) => `${account(req)}|${address(req)}`,
+      limit: () => limits.perAccount,
+      key: (req) => `${account(req)}|${address(req)}`,
     }),
-    rateLimit({
+    windowLimiter({
       ...common,
       store: stores('credentials-account'),
-      limit: ceiling,
-      keyGenerator: account,
+      limit: () => ceiling,
+      key: account,
     }),
   ];
 }

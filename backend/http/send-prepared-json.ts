@@ -24,3 +24,19 @@ export function sendPreparedJson(req: Request, res: Response, answer: PreparedJs
   res.set('Content-Type', 'application/json; charset=utf-8');
   res.send(answer.bytes);
 }
+
+/**
+ * Sends the answer to a POST that computes something (Match), as res.json would but without an
+ * ETag: res.send hashes the whole answer for one, and no client can revalidate a POST with it.
+ * Where answers are checked against openapi.yaml it goes through res.json, as above.
+ */
+export function sendComputedJson(req: Request, res: Response, body: unknown): void {
+  if (req.app.locals.validateResponses) {
+    res.json(body);
+    return;
+  }
+  const bytes = Buffer.from(JSON.stringify(body));
+  res.setHeader('Content-Type', 'application/json; charset=utf-8');
+  res.setHeader('Content-Length', bytes.length);
+  res.end(bytes);
+}

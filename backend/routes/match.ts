@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Quantity } from '../../shared/units/quantity';
 import { siFromRequest } from '../http/quantity';
+import { sendComputedJson } from '../http/send-prepared-json';
 import { matchPrepared } from '../services/match';
 import type { CatalogueStore } from '../services/catalogue-store';
 
@@ -28,7 +29,7 @@ export function matchRouter(catalogue: CatalogueStore): Router {
     };
     const table = await catalogue.get();
     const candidates = matchPrepared(table.matchTable(), reading, body.limit ?? 10);
-    res.json({
+    sendComputedJson(req, res, {
       reading: {
         conductivitySPerM: reading.conductivitySPerM,
         temperatureK: reading.temperatureK ?? null,

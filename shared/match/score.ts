@@ -228,6 +228,36 @@ export function scoreCandidate(
   return s && describeScore(reading, s, scorePrepared(reading, s));
 }
 
+/** An alloy's own figures in words, the same for every reading: written once per prepared table. */
+interface AlloyWords {
+  /** Its reference temperature, e.g. "20 °C". */
+  at: string;
+  /** Its conductivity range, e.g. "27.0–29.0 %IACS". */
+  range: string;
+  /** Its nominal density, e.g. "8.53 g/cm³". */
+  density: string | null;
+}
+
+const alloyWordsMemo = new WeakMap<AlloyScoring, AlloyWords>();
+
+/** "16.3 %IACS read at 60 °C": the reading as given, before correction. */
+function readingAt(sPerM: number, kelvin: number): string {
+  return `${formatIacs(sPerM)} %IACS read at ${formatCelsius(kelvin)}`;
+}
+
+function alloyWords(s: AlloyScoring): AlloyWords {
+  let words = alloyWordsMemo.get(s);
+  if (!words) {
+    words = {
+      at: formatCelsius(s.referenceK),
+      range: formatIacsRange(s.conductivity.min, s.conductivity.max),
+      density: s.density ? formatGPerCm3(s.density.nominal) : null,
+    };
+    alloyWordsMemo.set(s, words);
+  }
+  return words;
+}
+
 /**
  * Puts words to a comparison already scored ({@link scorePrepared}): how the reading was
  * corrected and where it lies against the alloy's ranges. The costly part of a match (strings for
@@ -241,11 +271,11 @@ export function describeScore(
   const { score, sigma, spread, corrected, densityFit } = prepared;
   const alloy = s.alloy;
   const reasons: string[] = [];
-  const referenceK = s.referenceK;
-  const measuredK = reading.temperatureK ?? referenceK;
+  const measuredK = reading.temperatureK ?? s.referenceK;
   const read = reading.conductivitySPerM;
-  const at = formatCelsius(referenceK);
-  const readAt = `${formatIacs(read)} %IACS read at ${formatCelsius(measuredK)}`;
+  const words = alloyWords(s);
+  const at = words.at;
+
   let correction: TemperatureCorrection;
   if (!corrected) {
     correction = {
@@ -256,14 +286,14 @@ export function describeScore(
     const recorded = s.alpha.alphaPerK;
     correction = { kind: 'recorded', alphaPerK: recorded };
     reasons.push(
-      `${readAt} corrects to ${formatIacs(sigma)} %IACS at ${at} (α = ${recorded.toPrecision(3)} /K)`,
+      `${readingAt(read, measuredK)} corrects to ${formatIacs(sigma)} %IACS at ${at} (α = ${recorded.toPrecision(3)} /K)`,
     );
   } else if (s.alpha.kind === 'estimated') {
     const estimate = s.alpha.estimate;
     const rule = `Matthiessen's rule from ${estimate.base.from}: α ≈ α_base·ρ_base/ρ_alloy = ${estimate.lowPerK.toPrecision(2)} /K, up to ${estimate.highPerK.toPrecision(2)} /K`;
     correction = { kind: 'estimated', alphaPerK: estimate.alphaPerK, rule };
     reasons.push(
-      `no temperature coefficient on record: estimated by ${rule}; ${readAt} corrects to ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}`,
+      `no temperature coefficient on record: estimated by ${rule}; ${readingAt(read, measuredK)} corrects to ${formatIacs(spread[0])}–${formatIacs(spread[1])} %IACS at ${at}`,
     );
   } else {
     correction = {
@@ -277,12 +307,12 @@ export function describeScore(
 
   const { min, max } = s.conductivity;
   if (spread[1] >= min && spread[0] <= max) {
-    reasons.push(`${formatIacs(sigma)} %IACS at ${at} lies inside ${formatIacsRange(min, max)}`);
+    reasons.push(`${formatIacs(sigma)} %IACS at ${at} lies inside ${words.range}`);
   } else {
     const side = spread[1] < min ? 'below' : 'above';
     const gap = spread[1] < min ? min - spread[1] : spread[0] - max;
     reasons.push(
-      `${formatIacs(sigma)} %IACS at ${at} lies ${formatIacs(gap)} %IACS ${side} ${formatIacsRange(min, max)}`,
+      `${formatIacs(sigma)} %IACS at ${at} lies ${formatIacs(gap)} %IACS ${side} ${words.range}`,
     );
   }
 
@@ -290,8 +320,8 @@ export function describeScore(
     const given = formatGPerCm3(reading.densityKgPerM3);
     reasons.push(
       densityFit > 0.5
-        ? `density ${given} matches ${formatGPerCm3(s.density.nominal)}`
-        : `density ${given} is off the handbook ${formatGPerCm3(s.density.nominal)}`,
+        ? `density ${given} matches ${words.density}`
+        : `density ${given} is off the handbook ${words.density}`,
     );
   }
 

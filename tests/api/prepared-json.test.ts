@@ -47,3 +47,44 @@ describe('a search answer sent from its cached bytes', () => {
     }
   });
 });
+
+describe('a Match answer sent without res.send', () => {
+  const readings = [
+    { conductivity: { value: 28, unit: '%IACS' }, density: { value: 8.53, unit: 'g/cm3' } },
+    {
+      conductivity: { value: 58, unit: 'MS/m' },
+      temperature: { value: 60, unit: 'C' },
+      limit: 3,
+    },
+  ];
+  it.each(readings)(
+    'the same bytes and type as res.json, and no ETag on a POST (%#)',
+    async (body) => {
+      // identity: the length is compared as sent, before compression takes it off.
+      const viaJson = await request(checked.app)
+        .post('/api/v1/match')
+        .set('Accept-Encoding', 'identity')
+        .send(body);
+      const viaBytes = await request(sent.app)
+        .post('/api/v1/match')
+        .set('Accept-Encoding', 'identity')
+        .send(body);
+      expect(viaJson.status).toBe(200);
+      expect(viaBytes.status).toBe(200);
+      expect(viaBytes.text).toBe(viaJson.text);
+      expect(viaBytes.headers['content-type']).toBe(viaJson.headers['content-type']);
+      expect(viaBytes.headers['content-length']).toBe(String(Buffer.byteLength(viaJson.text)));
+      expect(viaBytes.headers.etag).toBeUndefined();
+    },
+  );
+
+  it('is compressed when the client asks, like any other answer', async () => {
+    const res = await request(sent.app)
+      .post('/api/v1/match')
+      .set('Accept-Encoding', 'gzip')
+      .send(readings[0]);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-encoding']).toBe('gzip');
+    expect((res.body as { candidates: unknown[] }).candidates.length).toBeGreaterThan(0);
+  });
+});
